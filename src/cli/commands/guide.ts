@@ -1,0 +1,115 @@
+/**
+ * `kerfline guide <circuit> <layout> --out guide.html [--pdf guide.pdf] [--paper a4|letter]`
+ *
+ * Verifies the layout against the circuit (JSON document or SPICE deck, see ../io.ts) and
+ * writes the bench guide as one self-contained HTML file (default paper A4). `--pdf` also
+ * prints it to PDF through Chromium (playwright-core, executable from PLAYWRIGHT_CHROMIUM,
+ * default /usr/bin/chromium; the CSS page size wins). Exit 0 when written; 1 when the
+ * layout does not verify, when no guide could be made, or when --pdf was asked but
+ * Chromium is not installed; 2 for unreadable input or a usage error.
+ */
+import { existsSync } from 'node:fs';
+import { mkdir, writeFile } from 'node:fs/promises';
+import { dirname } from 'node:path';
+import { buildGuide, guideHtml, guidePages, type Paper } from '../../lib/guide/index.ts';
+import { loadCircuit, loadLayout, printProblems } from '../io.ts';
+
+const USAGE = 'usage: kerfline guide <circuit> <layout> --out guide.html [--pdf guide.pdf] [--paper a4|letter]\n';
+
+interface Args {
+  circuit?: string;
+  layout?: string;
+  out?: string;
+  pdf?: string;
+  paper: Paper;
+  error?: string;
+}
+
+function parseArgs(args: string[]): Args {
+  const out: Args = { paper: 'a4' };
+  const files: string[] = [];
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i]!;
+    const value = () => {
+      const v = args[++i];
+      if (!v || v.startsWith('--')) out.error = `${a} needs a value`;
+      return v ?? '';
+    };
+    if (a === '--out') out.out = value();
+    else if (a === '--pdf') out.pdf = value();
+    else if (a === '--paper') {
+      const v = value().toLowerCase();
+      if (v === 'a4' || v === 'letter') out.paper = v;
+      else out.error ??= `--paper is a4 or letter, not "${v}"`;
+    } else if (a.startsWith('-')) out.error ??= `unknown option ${a}`;
+    else files.push(a);
+  }
+  if (files.length !== 2) out.error ??= 'name the circuit file and then the layout file';
+  else [out.circuit, out.layout] = files;
+  if (!out.out && !out.error) out.error = 'say where to write the guide: --out guide.html';
+  return out;
+}
+
+/** Where playwright-core finds Chromium. */
+export function chromiumPath(): string {
+  return process.env.PLAYWRIGHT_CHROMIUM || '/usr/bin/chromium';
+}
+
+/** Print an HTML document to PDF bytes in headless Chromium, using the document's @page size. */
+export async function htmlToPdf(html: string): Promise<Uint8Array> {
+  const { chromium } = await import('playwright-core');
+  const browser = await chromium.launch({
+    executablePath: chromiumPath(),
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update'],
+  });
+  try {
+    const page = await browser.newPage();
+    await page.setContent(html, { waitUntil: 'load' });
+    return new Uint8Array(await page.pdf({ preferCSSPageSize: true, printBackground: true }));
+  } finally {
+    await browser.close();
+  }
+}
+
+export async function run(args: string[]): Promise<number> {
+  const a = parseArgs(args);
+  if (a.error) {
+    process.stderr.write(`kerfline guide: ${a.error}\n${USAGE}`);
+    return 2;
+  }
+  const circuit = await loadCircuit(a.circuit!);
+  if (!circuit.ok) {
+    printProblems([...circuit.problems, ...circuit.warnings], process.stderr, a.circuit);
+    return 2;
+  }
+  const layout = await loadLayout(a.layout!);
+  if (!layout.ok) {
+    printProblems([...layout.problems, ...layout.warnings], process.stderr, a.layout);
+    return 2;
+  }
+  const guide = buildGuide(circuit.value.circuit, layout.value);
+  if (!guide.ok) {
+    printProblems(guide.problems, process.stderr, a.layout);
+    return 1;
+  }
+  if (guide.warnings.length) printProblems(guide.warnings, process.stderr, a.layout);
+  const html = guideHtml(guide.value, { paper: a.paper });
+  await mkdir(dirname(a.out!), { recursive: true });
+  await writeFile(a.out!, html, 'utf8');
+  const pages = guidePages(guide.value, { paper: a.paper }).length;
+  process.stdout.write(`wrote ${a.out} (${pages} pages, ${a.paper})\n`);
+  if (a.pdf) {
+    if (!existsSync(chromiumPath())) {
+      process.stderr.write(
+        `kerfline guide: --pdf needs Chromium, not found at ${chromiumPath()}.\nInstall it (Debian: sudo apt-get install -y chromium) or set PLAYWRIGHT_CHROMIUM; the HTML guide above prints from any browser.\n`,
+      );
+      return 1;
+    }
+    const pdf = await htmlToPdf(html);
+    await mkdir(dirname(a.pdf), { recursive: true });
+    await writeFile(a.pdf, pdf);
+    process.stdout.write(`wrote ${a.pdf}\n`);
+  }
+  return 0;
+}

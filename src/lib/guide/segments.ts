@@ -1,0 +1,44 @@
+/**
+ * Links (component side) and copper-side wires as bench lists: both end holes named from
+ * both sides, the span in mm, and the length of wire to cut — the span plus
+ * `LEAD_ALLOWANCE_MM` at each end to pass through the board and bend over (common practice).
+ */
+import type { Layout, Segment } from '../model/layout.ts';
+import type { Hole } from '../model/problem.ts';
+import type { Scene } from '../render/index.ts';
+import { holeName } from './placed.ts';
+import type { SegmentItem } from './types.ts';
+
+export const LEAD_ALLOWANCE_MM = 5;
+
+/** Holes a straight copper-side wire passes over, ends included. */
+export function wireHolesOf(from: Hole, to: Hole): Hole[] {
+  if (from[0] !== to[0] && from[1] !== to[1]) return [from, to];
+  const n = Math.max(Math.abs(to[0] - from[0]), Math.abs(to[1] - from[1]));
+  const dx = Math.sign(to[0] - from[0]);
+  const dy = Math.sign(to[1] - from[1]);
+  return Array.from({ length: n + 1 }, (_, k) => [from[0] + k * dx, from[1] + k * dy] as Hole);
+}
+
+function item(kind: 'link' | 'wire', s: Segment, i: number, layout: Layout, net: string | undefined, allowance: number): SegmentItem {
+  const span = Math.hypot(s.to[0] - s.from[0], s.to[1] - s.from[1]) * layout.board.pitchMm;
+  const out: SegmentItem = {
+    id: `${kind === 'link' ? 'L' : 'W'}${i + 1}`,
+    from: holeName(s.from, layout.board.cols),
+    to: holeName(s.to, layout.board.cols),
+    lengthMm: Math.round(span * 100) / 100,
+    cutMm: Math.ceil(span + 2 * allowance),
+  };
+  if (net !== undefined) out.net = net;
+  return out;
+}
+
+/** Nets are read off the scene, which joined the copper already. */
+export function linkList(layout: Layout, scene: Scene): SegmentItem[] {
+  return layout.links.map((l, i) => item('link', l, i, layout, scene.links[i]?.net, LEAD_ALLOWANCE_MM));
+}
+
+/** Copper-side wires lie on the pads: only their ends are bent, so a smaller allowance. */
+export function wireList(layout: Layout, scene: Scene): SegmentItem[] {
+  return layout.wires.map((w, i) => item('wire', w, i, layout, scene.wires[i]?.net, LEAD_ALLOWANCE_MM / 2));
+}
