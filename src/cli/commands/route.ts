@@ -1,0 +1,102 @@
+/**
+ * `kerfline route <circuit> <layout> --out FILE [--cut hole|between|either] [--links-over-bodies]`
+ *
+ * Reads a circuit (JSON circuit document or SPICE deck, see ../io.ts) and a placed layout
+ * (every part placed; any cuts, links and wires in it are ignored), computes the track cuts,
+ * links and copper-side wires with the router (src/lib/route), checks the result from scratch
+ * with the verifier, writes the resolved layout to FILE and prints a summary: cuts, links and
+ * their total length, copper-side wires. `--cut` overrides the board's cutting style
+ * (default: the board's, else `either`); `--links-over-bodies` lets links pass over parts.
+ *
+ * Exit: 0 routed and verified clean; 1 unroutable (each reason printed) or, which would be a
+ * bug, a routed layout that does not verify (nothing is written then); 2 unreadable input or
+ * a usage error.
+ */
+import { CutStyleSchema, type CutStyle, type Problem } from '../../lib/model/index.ts';
+import { routeLayout } from '../../lib/route/index.ts';
+import { verifyLayout } from '../../lib/verify/index.ts';
+import { loadCircuit, loadLayout, printProblems, writeJsonFile } from '../io.ts';
+
+const USAGE = 'usage: kerfline route <circuit.json|netlist.cir> <layout.json> --out FILE [--cut hole|between|either] [--links-over-bodies]\n';
+
+interface Out {
+  write(s: string): unknown;
+}
+
+interface Args {
+  circuit?: string;
+  layout?: string;
+  out?: string;
+  cut?: CutStyle;
+  linksOverBodies: boolean;
+  error?: string;
+}
+
+function parseArgs(args: string[]): Args {
+  const a: Args = { linksOverBodies: false };
+  for (let i = 0; i < args.length; i++) {
+    const arg = args[i]!;
+    if (arg === '--out' || arg === '-o') {
+      const v = args[++i];
+      if (!v) a.error = `${arg} needs a file name`;
+      else a.out = v;
+    } else if (arg === '--cut') {
+      const v = CutStyleSchema.safeParse(args[++i]);
+      if (!v.success) a.error = '--cut takes hole, between or either';
+      else a.cut = v.data;
+    } else if (arg === '--links-over-bodies') a.linksOverBodies = true;
+    else if (arg.startsWith('-')) a.error = `unknown option ${arg}`;
+    else if (!a.circuit) a.circuit = arg;
+    else if (!a.layout) a.layout = arg;
+    else a.error = `too many files (${arg}): give one circuit and one layout`;
+  }
+  if (!a.error && (!a.circuit || !a.layout)) a.error = 'name the circuit file and the placed layout file';
+  if (!a.error && !a.out) a.error = 'say where to write the routed layout with --out FILE';
+  return a;
+}
+
+export async function run(args: string[], out: Out = process.stdout, err: Out = process.stderr): Promise<number> {
+  const a = parseArgs(args);
+  if (a.error) {
+    err.write(`kerfline route: ${a.error}\n${USAGE}`);
+    return 2;
+  }
+  const circuit = await loadCircuit(a.circuit!);
+  if (!circuit.ok) {
+    printProblems(circuit.problems, err, a.circuit);
+    return 2;
+  }
+  const placement = await loadLayout(a.layout!);
+  if (!placement.ok) {
+    printProblems(placement.problems, err, a.layout);
+    return 2;
+  }
+  const routed = routeLayout(circuit.value.design, placement.value, { ...(a.cut ? { cutStyle: a.cut } : {}), linksOverBodies: a.linksOverBodies });
+  if (!routed.ok) {
+    printProblems(routed.problems, err, a.layout);
+    // A placement the router cannot read is bad input; one it cannot route is a result.
+    const unroutable = routed.problems.every((p: Problem) => p.code === 'route.unroutable');
+    err.write(unroutable ? `kerfline route: not routable as placed (${routed.problems.length} problem${routed.problems.length === 1 ? '' : 's'})\n` : '');
+    return unroutable ? 1 : 2;
+  }
+  const { layout, stats } = routed.value;
+  const report = verifyLayout(circuit.value.circuit, layout);
+  if (!report.clean) {
+    printProblems(report.faults, err, a.out);
+    err.write('kerfline route: the routed layout does not verify; nothing written. Please report this with the input files.\n');
+    return 1;
+  }
+  await writeJsonFile(a.out!, layout);
+  const mm = (x: number) => `${x.toFixed(1)} mm`;
+  out.write(
+    [
+      `routed ${a.layout} → ${a.out}`,
+      `  cuts:  ${stats.cuts}`,
+      `  links: ${stats.links} (total ${mm(stats.linkLengthMm)})`,
+      `  wires: ${stats.wires} copper-side${stats.wires ? ` (total ${mm(stats.wireLengthMm)})` : ''}`,
+      `  verified clean (${report.warnings.length} warning${report.warnings.length === 1 ? '' : 's'} and notes)`,
+      '',
+    ].join('\n'),
+  );
+  return 0;
+}
