@@ -161,7 +161,7 @@ describe('board screen', () => {
     const { page } = await app.open();
     await page.getByTestId('open-safety').click();
     const safety = await page.getByTestId('safety-panel').textContent();
-    for (const words of ['mains', 'fumes', 'Lead', 'eye protection', 'local codes']) expect(safety).toContain(words);
+    for (const words of ['Low voltage only', 'mains', 'fumes', 'Lead', 'wash your hands', 'eye protection when trimming leads', 'local codes', 'licensed practice']) expect(safety).toContain(words);
     await page.keyboard.press('Escape');
     await page.keyboard.press('?');
     expect(await page.getByTestId('help-panel').textContent()).toContain('Ctrl+Shift+Z');

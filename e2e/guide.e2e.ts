@@ -23,8 +23,9 @@ import { loadCircuit, loadLayout } from '../src/cli/io.ts';
 import { chromiumPath, htmlToPdf } from '../src/cli/commands/guide.ts';
 import type { Circuit, Layout } from '../src/lib/model/index.ts';
 
-const PT_PER_MM = 72 / 25.4; // 1 pt = 25.4/72 mm
-const PITCH_MM = 2.54;
+// A PDF point is 1/72 in (ISO 32000-1, from memory); 1 in = 25.4 mm exactly (check-values.md header).
+const PT_PER_MM = 72 / 25.4;
+const PITCH_MM = 2.54; // check-values.md §8: 0.1 in hole pitch [S]
 
 async function pickDemo(): Promise<{ name: string; circuit: Circuit; layout: Layout }> {
   const candidates: [string, string][] = [
@@ -187,7 +188,7 @@ describe.skipIf(!hasChromium)('bench guide printed to PDF through Chromium', () 
     const doc = await getDocument({ data: await htmlToPdf(guideHtml(long, { paper: 'letter' })), isEvalSupported: false }).promise;
     expect(doc.numPages).toBe(plan.length);
     const first = await doc.getPage(1);
-    // US Letter is 8.5 × 11 in = 612 × 792 pt
+    // US Letter is 8.5 × 11 in (ANSI/ASME Y14.1 size A, from memory) = 612 × 792 pt
     expect(first.view.map((v) => Math.round(v))).toEqual([0, 0, 612, 792]);
     for (let i = 1; i <= doc.numPages; i++) expect(await pageText(await doc.getPage(i))).toContain(`page ${i} of ${plan.length}`);
     await doc.destroy();

@@ -20,7 +20,7 @@ function nasty() {
   const design: Design = {
     title: NASTY,
     nets: [],
-    parts: [{ ref: `R<b>&"1`, kind: 'resistor', value: NASTY, footprint: 'axial-small', pinNames: ['1', '2'], nets: { '1': 'A', '2': 'B' }, polarized: false, source: [0] }],
+    parts: [{ ref: `R<b>&"1`, kind: 'resistor', value: NASTY, footprint: 'axial-small', pinNames: ['1', '2'], nets: { '1': 'A"<n>&', '2': 'B' }, polarized: false, source: [0] }],
   };
   return { layout, design };
 }
@@ -28,7 +28,7 @@ function nasty() {
 const count = (svg: string, tag: string) => svg.split(`<${tag} `).length - 1;
 
 describe('sceneToSvgString (svgdom + svg.js)', () => {
-  it('escapes user text in title, ref and value', () => {
+  it('escapes user text in title, ref, value and net, in text and in attribute values', () => {
     const { layout, design } = nasty();
     const svg = sceneToSvgString(drawScene(layout, design, { side: 'component' }));
     expect(svg).not.toContain('<script');
@@ -36,6 +36,8 @@ describe('sceneToSvgString (svgdom + svg.js)', () => {
     expect(svg).toContain('&lt;script&gt;');
     expect(svg).toContain('&amp;');
     expect(svg).toMatch(/R&lt;b&gt;&amp;(&quot;|")1/);
+    expect(svg).toContain('data-ref="R&lt;b&gt;&amp;&quot;1"');
+    expect(svg).toContain('data-net="A&quot;&lt;n&gt;&amp;"');
   });
 
   it('draws cols × rows holes, and the copper-side cut under copper column 22', () => {

@@ -53,6 +53,26 @@ describe('kerfline check', () => {
     expect(r.code).toBe(2);
     expect(r.err).toMatch(/bad\.json:4:\d+: .*\(fix: use one of: "resistor"/);
   });
+  it('exit 2 and one clear line for binary data, an empty file, a layout and a deck with nothing to place', async () => {
+    const junk = join(dir, 'junk.cir');
+    writeFileSync(junk, Buffer.from(Array.from({ length: 300 }, (_, i) => (i * 89 + 7) % 256)));
+    const empty = join(dir, 'empty.json');
+    writeFileSync(empty, '');
+    const simOnly = join(dir, 'sim.cir');
+    writeFileSync(simOnly, 'only a model\nE1 a 0 b 0 10\n.end\n');
+    const cases: [string, RegExp][] = [
+      [junk, /junk\.cir: not a text file: it holds binary data \(fix: give a circuit document/],
+      [empty, /empty\.json:1:1: the file is empty \(fix: /],
+      [join(LAYOUTS, 'bench-buffer.hand.layout.json'), /:2:\d+: format: this is a layout document .*not a circuit \(fix: .*circuit file goes first/],
+      [simOnly, /sim\.cir:1:1: no element of the netlist can go on a board/],
+    ];
+    for (const [f, want] of cases) {
+      const r = await capture([f]);
+      expect([f, r.code]).toEqual([f, 2]);
+      expect(r.err.split('\n')[0]).toMatch(want);
+      expect(r.err).not.toMatch(/internal error|\n\s+at .+:\d+:\d+/);
+    }
+  });
   it('exit 2 on usage errors', async () => {
     expect((await capture([])).code).toBe(2);
     expect((await capture(['a.json', '--frob'])).code).toBe(2);

@@ -111,7 +111,8 @@ export async function run(args: string[]): Promise<number> {
     }
     return 2;
   }
-  process.stdout.write(a.json ? JSON.stringify(summary(a.file, r.value), null, 2) + '\n' : text(a.file, r.value));
+  // Refs, values and net names come from the file: no control character reaches the terminal.
+  process.stdout.write(a.json ? JSON.stringify(summary(a.file, r.value), null, 2) + '\n' : text(a.file, r.value).replace(/[\u0000-\u0009\u000b-\u001f\u007f-\u009f]/g, ' '));
   return 0;
 }
 

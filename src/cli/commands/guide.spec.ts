@@ -56,6 +56,17 @@ describe('kerfline guide', () => {
     expect(readFileSync(out, 'utf8')).toContain('size: letter portrait');
   });
 
+  it('an --out that cannot be written, or a layout given as the circuit: exit 2 with the reason', async () => {
+    const d = demos()[0]!;
+    expect(await run([d.circuit, d.layout, '--out', dir])).toBe(2);
+    expect(await run([d.layout, d.layout, '--out', join(dir, 'g.html')])).toBe(2);
+    const said = vi.mocked(process.stderr.write).mock.calls.map((c) => String(c[0])).join('');
+    expect(said).toContain(`cannot write ${dir}: it is a folder`);
+    expect(said).toMatch(/format: this is a layout document .*not a circuit/);
+    expect(said).not.toMatch(/internal error|\n\s+at .+:\d+:\d+/);
+    expect(existsSync(join(dir, 'g.html'))).toBe(false);
+  });
+
   it('refuses bad usage with exit 2 and a faulty layout with exit 1', async () => {
     expect(await run(['layouts/bench-buffer.circuit.json'])).toBe(2);
     expect(await run(['a', 'b', '--out', join(dir, 'g.html'), '--paper', 'a3'])).toBe(2);

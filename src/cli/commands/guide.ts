@@ -6,13 +6,12 @@
  * prints it to PDF through Chromium (playwright-core, executable from PLAYWRIGHT_CHROMIUM,
  * default /usr/bin/chromium; the CSS page size wins). Exit 0 when written; 1 when the
  * layout does not verify, when no guide could be made, or when --pdf was asked but
- * Chromium is not installed; 2 for unreadable input or a usage error.
+ * Chromium is not installed or cannot print; 2 for unreadable input, an output file that
+ * cannot be written, or a usage error.
  */
 import { existsSync } from 'node:fs';
-import { mkdir, writeFile } from 'node:fs/promises';
-import { dirname } from 'node:path';
 import { buildGuide, guideHtml, guidePages, type Paper } from '../../lib/guide/index.ts';
-import { loadCircuit, loadLayout, printProblems } from '../io.ts';
+import { loadCircuit, loadLayout, printProblems, writeTextFile } from '../io.ts';
 
 const USAGE = 'usage: kerfline guide <circuit> <layout> --out guide.html [--pdf guide.pdf] [--paper a4|letter]\n';
 
@@ -95,8 +94,11 @@ export async function run(args: string[]): Promise<number> {
   }
   if (guide.warnings.length) printProblems(guide.warnings, process.stderr, a.layout);
   const html = guideHtml(guide.value, { paper: a.paper });
-  await mkdir(dirname(a.out!), { recursive: true });
-  await writeFile(a.out!, html, 'utf8');
+  const written = await writeTextFile(a.out!, html);
+  if (!written.ok) {
+    printProblems(written.problems, process.stderr);
+    return 2;
+  }
   const pages = guidePages(guide.value, { paper: a.paper }).length;
   process.stdout.write(`wrote ${a.out} (${pages} pages, ${a.paper})\n`);
   if (a.pdf) {
@@ -106,9 +108,19 @@ export async function run(args: string[]): Promise<number> {
       );
       return 1;
     }
-    const pdf = await htmlToPdf(html);
-    await mkdir(dirname(a.pdf), { recursive: true });
-    await writeFile(a.pdf, pdf);
+    let pdf: Uint8Array;
+    try {
+      pdf = await htmlToPdf(html);
+    } catch (e) {
+      // Chromium that will not start or print is the machine, not the input: say so in one line.
+      process.stderr.write(`kerfline guide: Chromium at ${chromiumPath()} could not print the PDF (${(e instanceof Error ? e.message : String(e)).split('\n')[0]}); the HTML guide above prints from any browser.\n`);
+      return 1;
+    }
+    const pdfWritten = await writeTextFile(a.pdf, pdf);
+    if (!pdfWritten.ok) {
+      printProblems(pdfWritten.problems, process.stderr);
+      return 2;
+    }
     process.stdout.write(`wrote ${a.pdf}\n`);
   }
   return 0;

@@ -9,13 +9,13 @@
  * (default: the board's, else `either`); `--links-over-bodies` lets links pass over parts.
  *
  * Exit: 0 routed and verified clean; 1 unroutable (each reason printed) or, which would be a
- * bug, a routed layout that does not verify (nothing is written then); 2 unreadable input or
- * a usage error.
+ * bug, a routed layout that does not verify (nothing is written then); 2 unreadable input,
+ * an output file that cannot be written, or a usage error.
  */
 import { CutStyleSchema, type CutStyle, type Problem } from '../../lib/model/index.ts';
 import { routeLayout } from '../../lib/route/index.ts';
 import { verifyLayout } from '../../lib/verify/index.ts';
-import { loadCircuit, loadLayout, printProblems, writeJsonFile } from '../io.ts';
+import { loadCircuit, loadLayout, printProblems, writeTextFile } from '../io.ts';
 
 const USAGE = 'usage: kerfline route <circuit.json|netlist.cir> <layout.json> --out FILE [--cut hole|between|either] [--links-over-bodies]\n';
 
@@ -86,7 +86,11 @@ export async function run(args: string[], out: Out = process.stdout, err: Out = 
     err.write('kerfline route: the routed layout does not verify; nothing written. Please report this with the input files.\n');
     return 1;
   }
-  await writeJsonFile(a.out!, layout);
+  const written = await writeTextFile(a.out!, JSON.stringify(layout, null, 2) + '\n');
+  if (!written.ok) {
+    printProblems(written.problems, err);
+    return 2;
+  }
   const mm = (x: number) => `${x.toFixed(1)} mm`;
   out.write(
     [

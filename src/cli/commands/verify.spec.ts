@@ -78,6 +78,25 @@ describe('kerfline verify', () => {
     expect((JSON.parse(j.out) as { errors: { path: unknown[] }[] }).errors.map((e) => e.path)).toContainEqual(['board', 'cols']);
   });
 
+  it('binary data, an empty file or a circuit where the layout belongs: exit 2, one line naming it', async () => {
+    const junk = join(dir, 'junk.json');
+    writeFileSync(junk, Buffer.from(Array.from({ length: 300 }, (_, i) => (i * 89 + 7) % 256)));
+    const empty = join(dir, 'empty.json');
+    writeFileSync(empty, ' \n');
+    const cases: [string, RegExp][] = [
+      [junk, /^.*junk\.json: not a text file/],
+      [empty, /^.*empty\.json:1:1: the file is empty/],
+      [circuitFile, /^.*bench-buffer\.circuit\.json:2:\d+: format: this is a circuit document .*not a layout/],
+    ];
+    for (const [f, want] of cases) {
+      const r = await verify(circuitFile, f);
+      expect(r.code).toBe(2);
+      expect(r.err.trim().split('\n')).toHaveLength(1);
+      expect(r.err).toMatch(want);
+      expect(noStack(r.err)).toBe(true);
+    }
+  });
+
   it('broken JSON, a missing file or a usage error: exit 2, no stack trace', async () => {
     const broken = join(dir, 'broken.json');
     writeFileSync(broken, '{ "format": "kerfline.layout", ');

@@ -62,7 +62,7 @@ function parseArgs(args: string[]): Args {
 
 /** One line of user-derived text: no line breaks or control characters reach the terminal. */
 function oneLine(s: string): string {
-  return s.replace(/[\u0000-\u001f\u007f]+/g, ' ');
+  return s.replace(/[\u0000-\u001f\u007f-\u009f]+/g, ' ');
 }
 
 /** `file:line:column: parts[0].footprint: message (fix: hint)` — the place and the schema path. */

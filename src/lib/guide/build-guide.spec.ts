@@ -49,6 +49,7 @@ describe('buildGuide', () => {
       ['L2', 'B13', 'G13', 12.7, 'OUT'],
       ['L3', 'E9', 'H9', 7.62, 'BASE'],
     ]);
+    // wire to cut = ⌈span + 5 mm each end to pass through and bend (segments.ts, common practice)⌉ = ⌈10.16 + 10⌉
     expect(g.links[0]!.cutMm).toBe(21);
     expect(g.wireStock.awg).toBe(22);
   });

@@ -5,6 +5,9 @@ import { benchBufferLayout } from '../render/fixture.ts';
 import { buildGuide } from './build-guide.ts';
 import { guideHtml, guidePages } from './html.ts';
 
+/** A net name that is markup: it reaches the links list, the off-board list, the probes and the drawings. */
+const NET = 'OUT</b><svg onload=alert(2)>"&';
+
 function nastyCircuit(): Circuit {
   const c = CircuitSchema.parse(JSON.parse(readFileSync(new URL('../../../layouts/bench-buffer.circuit.json', import.meta.url), 'utf8')));
   c.title = `<script>alert("t")</script> & 'co'`;
@@ -12,6 +15,9 @@ function nastyCircuit(): Circuit {
   j1.value = '<b>panel</b> & "wires"';
   j1.labels = { ...j1.labels, '1': '<img src=x onerror=alert(1)>' };
   c.parts.find((p) => p.ref === 'Q1')!.value = 'BC549C</text><script>';
+  for (const p of c.parts) for (const [pin, net] of Object.entries(p.pins)) if (net === 'OUT') p.pins[pin] = NET;
+  c.nets[NET] = c.nets['OUT']!;
+  delete c.nets['OUT'];
   return c;
 }
 
@@ -22,14 +28,26 @@ function guide() {
 }
 
 describe('guideHtml', () => {
-  it('escapes user text everywhere (title, values, labels, also inside the drawings)', () => {
+  it('escapes user text everywhere (title, values, labels, net names, also inside the drawings)', () => {
     const html = guideHtml(guide(), { paper: 'a4' });
     expect(html).not.toMatch(/<script/i);
     expect(html).not.toContain('<img');
     expect(html).not.toContain('<b>panel');
+    expect(html).not.toMatch(/<svg onload/i);
+    const net = 'OUT&lt;/b&gt;&lt;svg onload=alert(2)&gt;&quot;&amp;';
+    expect(html).toContain(` · net ${net}`); // links list
+    expect(html).toContain(`net <b>${net}</b>`); // off-board wiring
+    expect(html).toContain(`data-net="${net}"`); // drawings
     expect(html).toContain('&lt;script&gt;alert(&quot;t&quot;)&lt;/script&gt; &amp; &#39;co&#39;');
     expect(html).toContain('&lt;img src=x onerror=alert(1)&gt;');
     expect(html).toContain('BC549C&lt;/text&gt;&lt;script&gt;');
+  });
+
+  it('puts the bench cautions on the first page (check-values.md §12)', () => {
+    const first = guidePages(guide(), { paper: 'a4' })[0]!;
+    expect(first.section).toBe('prepare');
+    for (const words of ['Low voltage only', 'Never connect mains', 'fume extraction', 'wash your hands', 'eye protection', 'clipping leads', 'local codes', 'licensed practice'])
+      expect(first.body).toContain(words);
   });
 
   it('sets the paper size in @page and prints one section per planned sheet', () => {

@@ -4,7 +4,8 @@ import { contentBox, linesPerPage, paginate, type Line } from './pages.ts';
 
 describe('pages', () => {
   it('knows the text area of A4 and Letter', () => {
-    // ISO 216 A4 210 × 297 mm and US Letter 215.9 × 279.4 mm, less 12 mm margins
+    // ISO 216 A4 210 × 297 mm; US Letter 8.5 × 11 in = 215.9 × 279.4 mm (ANSI/ASME Y14.1
+    // size A, from memory); less our 12 mm margins
     expect(contentBox('a4')).toEqual({ width: 186, height: 273 });
     expect(contentBox('letter')).toEqual({ width: 191.9, height: 255.4 });
     expect(contentBox('a4', true)).toEqual({ width: 273, height: 186 });

@@ -134,3 +134,76 @@ export function locateJsonPath(text: string, path: (string | number)[]): TextPos
     return undefined;
   }
 }
+
+/**
+ * Offset of the first character where `text` stops being JSON (RFC 8259), `text.length`
+ * when it ends too early, or undefined when it is valid. For syntax errors whose engine
+ * message gives no position (V8 says only "Unexpected token …" or "Unexpected end").
+ */
+export function jsonErrorOffset(text: string): number | undefined {
+  let i = 0;
+  const n = text.length;
+  const stop = (): never => {
+    throw new SyntaxError(String(i));
+  };
+  const ws = () => {
+    while (i < n && ' \t\n\r'.includes(text[i]!)) i++;
+  };
+  const str = () => {
+    i++;
+    while (i < n && text[i] !== '"') {
+      if (text.charCodeAt(i) < 0x20) stop();
+      if (text[i] === '\\') {
+        i++;
+        if (text[i] === 'u') {
+          if (!/^[0-9a-fA-F]{4}$/.test(text.slice(i + 1, i + 5))) stop();
+          i += 5;
+        } else if (i < n && '"\\/bfnrt'.includes(text[i]!)) i++;
+        else stop();
+      } else i++;
+    }
+    if (i >= n) stop();
+    i++;
+  };
+  const list = (close: string, item: () => void) => {
+    i++;
+    ws();
+    if (text[i] === close) return void i++;
+    for (;;) {
+      item();
+      ws();
+      if (text[i] === ',') i++;
+      else if (text[i] === close) return void i++;
+      else stop();
+    }
+  };
+  const value = (): void => {
+    ws();
+    const c = text[i];
+    if (c === '{')
+      list('}', () => {
+        ws();
+        if (text[i] !== '"') stop();
+        str();
+        ws();
+        if (text[i] !== ':') stop();
+        i++;
+        value();
+      });
+    else if (c === '[') list(']', value);
+    else if (c === '"') str();
+    else {
+      const m = /^(?:true|false|null|-?(?:0|[1-9]\d*)(?:\.\d+)?(?:[eE][+-]?\d+)?)/.exec(text.slice(i, i + 400));
+      if (!m) stop();
+      i += m![0].length;
+    }
+  };
+  try {
+    value();
+    ws();
+    return i < n ? i : undefined;
+  } catch (e) {
+    // Too deep to scan (RangeError): no position rather than a wrong one.
+    return e instanceof SyntaxError ? Math.min(Number(e.message), n) : undefined;
+  }
+}

@@ -4,7 +4,9 @@
  */
 import { z } from 'zod';
 
-export const HoleSchema = z.tuple([z.number().int().min(0), z.number().int().min(0)]);
+/** A hole [column, row]: 0-based from the top-left hole, seen from the component side. */
+const HOLE_MIN = 'hole columns and rows count from 0 at the top-left hole; a negative one is off the board';
+export const HoleSchema = z.tuple([z.number().int().min(0, HOLE_MIN), z.number().int().min(0, HOLE_MIN)]);
 
 export const BOARD_KINDS = ['strip', 'pads', 'bus'] as const;
 export const BoardKindSchema = z.enum(BOARD_KINDS);

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { CircuitSchema, LayoutSchema, ProjectSchema, formatPath, formatProblem, locateJsonPath, parseDocument, migrateProject } from './index.ts';
+import { jsonErrorOffset } from './json-locate.ts';
 
 // A circuit using every field the exchange contract names (exchange.md "Circuit document").
 const circuit = {
@@ -36,6 +37,7 @@ describe('exchange documents', () => {
   });
   it('defaults pitch to 2.54 mm and empty cut/link/wire lists', () => {
     const l = LayoutSchema.parse({ format: 'kerfline.layout', version: 1, board: { kind: 'pads', cols: 4, rows: 4 }, parts: [] });
+    // exchange.md: pitch is 2.54 mm (0.1 in) unless the board says otherwise (check-values.md §8 [S])
     expect(l.board.pitchMm).toBe(2.54);
     expect(l.cuts).toEqual([]);
     expect(l.wires).toEqual([]);
@@ -72,16 +74,73 @@ describe('problems name their place', () => {
       expect(r.problems[0]!.line).toBe(3);
     }
   });
+  it('places a syntax error the engine gives no position for (a stray token, a cut-off end)', () => {
+    const at = (text: string) => {
+      const r = parseDocument(LayoutSchema, text, 'layout');
+      return r.ok ? undefined : [r.problems[0]!.line, r.problems[0]!.column];
+    };
+    expect(at('JP\u0001 not json')).toEqual([1, 1]);
+    expect(at('{\n  "format": "kerfline.layout",\n  "board": x\n}')).toEqual([3, 12]);
+    expect(at('{\n  "parts": [1, 2')).toEqual([2, 17]);
+    expect(at('')).toEqual([1, 1]);
+  });
+  it('the syntax scanner agrees with JSON.parse on what is valid (property)', () => {
+    const bits = ['{', '}', '[', ']', ',', ':', '"', ' ', 'true', 'nul', '-', '0', '1.', 'e5', '"a\\u12"', '\\', '\n'];
+    const text = fc.oneof(fc.json(), fc.string(), fc.array(fc.constantFrom(...bits), { maxLength: 12 }).map((a) => a.join('')), fc.tuple(fc.json(), fc.nat(), fc.constantFrom(...bits)).map(([j, k, b]) => j.slice(0, k % (j.length + 1)) + b + j.slice(k % (j.length + 1))));
+    fc.assert(
+      fc.property(text, (s) => {
+        let valid = true;
+        try {
+          JSON.parse(s);
+        } catch {
+          valid = false;
+        }
+        const off = jsonErrorOffset(s);
+        expect(off === undefined).toBe(valid);
+        if (off !== undefined) expect(off).toBeLessThanOrEqual(s.length);
+      }),
+      { numRuns: 3000 },
+    );
+  });
   it('formats paths readably', () => {
     expect(formatPath(['parts', 3, 'pins', 'K'])).toBe('parts[3].pins.K');
     expect(formatPath(['nets', 'V+'])).toBe('nets["V+"]');
   });
-  it('locating a path never throws and lands on the value (property)', () => {
+  it('locating any path never throws and answers a real place (property)', () => {
     fc.assert(
       fc.property(fc.jsonValue(), fc.array(fc.oneof(fc.string(), fc.nat(5)), { maxLength: 4 }), (value, path) => {
         const text = JSON.stringify(value, null, 1) ?? 'null';
         const pos = locateJsonPath(text, path);
         expect(pos === undefined || (pos.line >= 1 && pos.column >= 1)).toBe(true);
+      }),
+      { numRuns: 1000 },
+    );
+  });
+  it('a path that exists lands exactly on its value (property)', () => {
+    fc.assert(
+      fc.property(fc.jsonValue(), fc.array(fc.nat(), { maxLength: 5 }), fc.integer({ min: 0, max: 2 }), (value, steps, indent) => {
+        // Walk into the value to pick a path that is really there.
+        const path: (string | number)[] = [];
+        let sub: unknown = value;
+        for (const step of steps) {
+          if (Array.isArray(sub) && sub.length) {
+            path.push(step % sub.length);
+            sub = sub[step % sub.length];
+          } else if (sub && typeof sub === 'object' && Object.keys(sub).length) {
+            const key = Object.keys(sub)[step % Object.keys(sub).length]!;
+            path.push(key);
+            sub = (sub as Record<string, unknown>)[key];
+          } else break;
+        }
+        const text = JSON.stringify(value, null, indent);
+        const pos = locateJsonPath(text, path)!;
+        expect(pos).toBeDefined();
+        const lines = text.split('\n');
+        const offset = lines.slice(0, pos.line - 1).reduce((n, l) => n + l.length + 1, 0) + pos.column - 1;
+        // Compact text holds the value's own JSON verbatim; indented text starts it there.
+        const own = JSON.stringify(sub);
+        if (indent === 0) expect(text.slice(offset, offset + own.length)).toBe(own);
+        else expect(text[offset]).toBe(own[0]);
       }),
       { numRuns: 1000 },
     );

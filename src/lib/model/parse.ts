@@ -4,7 +4,7 @@
  */
 import type { z } from 'zod';
 import { fail, ok, type Problem, type Result } from './problem.ts';
-import { locateJsonPath, offsetToLineColumn } from './json-locate.ts';
+import { jsonErrorOffset, locateJsonPath, offsetToLineColumn } from './json-locate.ts';
 
 /** Turn zod issues into problems (one per issue, all of them). */
 export function zodProblems(error: z.ZodError, prefix: string, text?: string): Problem[] {
@@ -52,7 +52,10 @@ export function parseJsonText(text: string, prefix: string): Result<unknown> {
   } catch (e) {
     const msg = e instanceof Error ? e.message : String(e);
     const m = /position (\d+)/.exec(msg);
-    const lc = m ? offsetToLineColumn(text, Number(m[1])) : /line (\d+) column (\d+)/.exec(msg);
+    // No position in the engine's message: find the place ourselves.
+    const found = m ? Number(m[1]) : /line (\d+) column (\d+)/.test(msg) || typeof text !== 'string' ? undefined : jsonErrorOffset(text);
+    const at = found ?? (/end of (JSON )?input/i.test(msg) && typeof text === 'string' ? text.length : undefined);
+    const lc = at !== undefined ? offsetToLineColumn(text, at) : /line (\d+) column (\d+)/.exec(msg);
     const p: Problem = {
       code: `${prefix}.json-syntax`,
       severity: 'error',

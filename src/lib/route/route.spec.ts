@@ -24,7 +24,7 @@ describe('routeLayout on strip boards', () => {
   });
 
   it('joins a net on two strips with one straight column link and reports its length in mm', () => {
-    // A on row 0 (R1) and row 5 (R2): one link, 5 holes long → 5 × 2.54 mm
+    // A on row 0 (R1) and row 5 (R2): one link, 5 holes long → 5 × 2.54 mm (the board pitch)
     const c = handCase(makeBoard('strip', 8, 7), [resistor('R1', 1, 0, 'A', 4, 'B'), resistor('R2', 5, 1, 'C', 5, 'A')]);
     const r = routeClean(c);
     expect(r.layout.links).toHaveLength(1);
