@@ -1,0 +1,70 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { makeBoard } from '../board/grid.ts';
+import { copperMap } from './copper-map.ts';
+import { placementCost } from './cost.ts';
+import { buildProblem } from './problem.ts';
+import { PlaceState, type Spot } from './state.ts';
+import { circuitOf, designOf } from './test-kit.ts';
+
+const design = designOf(
+  circuitOf([
+    { ref: 'R1', kind: 'resistor', pins: { '1': 'A', '2': 'B' } },
+    { ref: 'R2', kind: 'resistor', pins: { '1': 'B', '2': 'C' } },
+    { ref: 'Q1', kind: 'npn', pinout: 'EBC', pins: { C: 'A', B: 'B', E: 'C' } },
+    { ref: 'C1', kind: 'capacitor', pins: { '1': 'A', '2': 'C' } },
+    { ref: 'U1', kind: 'ic', package: 'DIP-8', pins: { '1': 'A', '4': 'C', '8': 'B' } },
+  ]),
+);
+const problem = buildProblem(design, { padsEdge: 'left' });
+const board = makeBoard('strip', 14, 12);
+
+function fresh(spots: Spot[]): PlaceState {
+  const s = new PlaceState(problem, copperMap(board));
+  spots.forEach((spot, p) => s.place(p, spot));
+  s.settle();
+  return s;
+}
+
+describe('PlaceState', () => {
+  it('gives every unconnected IC pin a net of its own', () => {
+    const u1 = problem.parts.find((p) => p.ref === 'U1')!;
+    const open = u1.pinNet.filter((n) => problem.nets[n]!.open);
+    expect(open).toHaveLength(5);
+    expect(new Set(open).size).toBe(5);
+  });
+
+  it('refuses overlapping bodies and spots off the board', () => {
+    const s = new PlaceState(problem, copperMap(board));
+    expect(s.fits(0, { x: 0, y: 0, pose: 0 })).toBe(true);
+    s.place(0, { x: 0, y: 0, pose: 0 });
+    expect(s.fits(1, { x: 0, y: 0, pose: 0 })).toBe(false);
+    expect(s.fits(1, { x: 13, y: 0, pose: 0 })).toBe(false);
+    expect(s.fits(1, { x: -1, y: 5, pose: 0 })).toBe(false);
+  });
+
+  it('keeps its incremental cost equal to a placement built from scratch', () => {
+    const start: Spot[] = [
+      { x: 0, y: 0, pose: 0 },
+      { x: 0, y: 2, pose: 0 },
+      { x: 0, y: 4, pose: 0 },
+      { x: 0, y: 6, pose: 0 },
+      { x: 8, y: 4, pose: 0 },
+    ];
+    fc.assert(
+      fc.property(fc.array(fc.tuple(fc.nat(4), fc.nat(13), fc.nat(11), fc.nat(40)), { maxLength: 40 }), (moves) => {
+        const s = fresh(start);
+        for (const [p, x, y, k] of moves) {
+          const spot = { x, y, pose: k % problem.parts[p]!.poses.length };
+          s.moveMany([p], [spot]);
+          if (x % 2) s.settle();
+        }
+        s.settle();
+        const again = fresh(problem.parts.map((_, p) => s.spotOf(p)));
+        expect(placementCost(s)).toEqual(placementCost(again));
+        expect(s.blockedSum).toBe(again.blockedSum);
+      }),
+      { numRuns: 60 },
+    );
+  });
+});
