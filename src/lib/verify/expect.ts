@@ -11,10 +11,11 @@
 import type { Circuit } from '../model/circuit.ts';
 import type { Layout } from '../model/layout.ts';
 import type { Problem } from '../model/problem.ts';
-import { KINDS, isPolarized, leadOrder, partPinNames } from '../parts/index.ts';
-import { checkCircuitPart } from './circuit-check.ts';
+import type { CircuitPart } from '../model/circuit.ts';
+import { KINDS, checkPart, isPolarized, leadOrder, partPinNames } from '../parts/index.ts';
 import { footprintNamed } from './footprints.ts';
 import { checkPacking } from './packing.ts';
+import { matches, snapshot } from './snapshot.ts';
 import type { PinRef } from './types.ts';
 import { listText, problem } from './words.ts';
 
@@ -24,7 +25,7 @@ export interface ExpectedPart {
   path: (string | number)[];
   describe: string;
   /** Every pin, connected or not. */
-  pinNames: string[];
+  pinNames: readonly string[];
   /** pin → net; pins missing here are unconnected. */
   nets: Record<string, string>;
   openAllowed: boolean;
@@ -41,7 +42,7 @@ export interface ExpectedPart {
 
 export interface Expected {
   parts: Map<string, ExpectedPart>;
-  /** net → its pins at package level, nets in name order. */
+  /** net → its pins at package level, nets in the order their first pin is met. */
   nets: Map<string, PinRef[]>;
   faults: Problem[];
   warnings: Problem[];
@@ -56,8 +57,10 @@ export function readExpected(circuit: Circuit, layout: LayoutMaps): Expected {
   const warnings: Problem[] = [];
   const parts = new Map<string, ExpectedPart>();
   const seen = new Map<string, number>();
+  const sections = new Set<string>();
 
   circuit.parts.forEach((part, i) => {
+    if (part.kind === 'opamp') sections.add(part.ref);
     const prev = seen.get(part.ref);
     if (prev !== undefined) {
       faults.push(
@@ -69,24 +72,9 @@ export function readExpected(circuit: Circuit, layout: LayoutMaps): Expected {
       return;
     }
     seen.set(part.ref, i);
-    for (const p of checkCircuitPart(part, i))
-      faults.push({ ...p, code: 'verify.circuit', data: { ...(p.data ?? {}), cause: p.code } });
-    if (part.kind === 'opamp') return;
-    const e: ExpectedPart = {
-      ref: part.ref,
-      path: ['parts', i],
-      describe: KINDS[part.kind].describe,
-      pinNames: partPinNames(part),
-      nets: bare(part.pins),
-      openAllowed: KINDS[part.kind].openPinsAllowed,
-      polarized: isPolarized(part),
-      packed: false,
-    };
-    if (part.span) e.span = { min: part.span.min, max: part.span.max };
-    const order = leadOrder(part);
-    if (order) e.order = order;
-    if (part.footprint) e.footprint = part.footprint;
-    parts.set(part.ref, e);
+    const read = readPart(part, i);
+    for (const p of read.problems) faults.push(fresh(p));
+    if (read.expected) parts.set(part.ref, read.expected);
   });
 
   const packed = checkPacking(circuit, layout, new Set(parts.keys()));
@@ -106,26 +94,77 @@ export function readExpected(circuit: Circuit, layout: LayoutMaps): Expected {
   }
   applySpares(layout, parts, faults);
 
+  // nets in the order their first pin is met; expectedNetlist sorts them by name
   const nets = new Map<string, PinRef[]>();
   for (const e of parts.values())
     for (const pin of e.pinNames) {
       const net = e.nets[pin];
       if (net === undefined) continue;
-      const list = nets.get(net) ?? nets.set(net, []).get(net)!;
-      list.push({ ref: e.ref, pin });
+      const list = nets.get(net);
+      if (list) list.push({ ref: e.ref, pin });
+      else nets.set(net, [{ ref: e.ref, pin }]);
     }
-  const sorted = new Map([...nets.entries()].sort((a, b) => (a[0] < b[0] ? -1 : a[0] > b[0] ? 1 : 0)));
-  for (const [name, pins] of sorted)
+  for (const [name, pins] of nets)
     if (pins.length === 1)
       warnings.push(
         problem('verify.single-pin-net', 'warning', ['nets', name], `net ${name} reaches only ${pins[0]!.ref} pin ${pins[0]!.pin}`, {
           hint: 'check the spelling of the net name, or connect another pin to it',
           nets: [name],
-          pins,
+          pins: [{ ...pins[0]! }],
         }),
       );
-  const sections = new Set(circuit.parts.filter((p) => p.kind === 'opamp').map((p) => p.ref));
-  return { parts, nets: sorted, faults, warnings, sections };
+  return { parts, nets, faults, warnings, sections };
+}
+
+/** What one circuit part (not a repeated ref) gives: its circuit faults and, unless an op-amp section, its expected part. */
+interface PartReading {
+  problems: Problem[];
+  expected?: ExpectedPart;
+}
+
+/**
+ * Parts read before, each with a snapshot of the part to tell whether it is still the
+ * same: the live editor verifies the same circuit again and again, and checkPart (which
+ * builds footprints) is the costly step. Entries are shared between calls: their problems
+ * leave as copies and their expected parts are never changed (applySpares copies first).
+ */
+let readings = new WeakMap<CircuitPart, { index: number; snap: unknown; reading: PartReading }>();
+let remembered = 0;
+/** Bound on remembered parts. */
+const MAX_READINGS = 8192;
+
+function readPart(part: CircuitPart, i: number): PartReading {
+  const got = readings.get(part);
+  if (got && got.index === i && matches(part, got.snap)) return got.reading;
+  const reading: PartReading = { problems: checkPart(part, ['parts', i]).map((p) => ({ ...p, code: 'verify.circuit', data: { ...(p.data ?? {}), cause: p.code } })) };
+  if (part.kind !== 'opamp') {
+    const e: ExpectedPart = {
+      ref: part.ref,
+      path: ['parts', i],
+      describe: KINDS[part.kind].describe,
+      pinNames: Object.freeze(partPinNames(part)),
+      nets: bare(part.pins),
+      openAllowed: KINDS[part.kind].openPinsAllowed,
+      polarized: isPolarized(part),
+      packed: false,
+    };
+    if (part.span) e.span = { min: part.span.min, max: part.span.max };
+    const order = leadOrder(part);
+    if (order) e.order = order;
+    if (part.footprint) e.footprint = part.footprint;
+    reading.expected = e;
+  }
+  if (++remembered > MAX_READINGS) {
+    readings = new WeakMap();
+    remembered = 0;
+  }
+  readings.set(part, { index: i, snap: snapshot(part), reading });
+  return reading;
+}
+
+/** Problems leave the verifier as fresh data (never shared with the memo). */
+function fresh(p: Problem): Problem {
+  return JSON.parse(JSON.stringify(p)) as Problem;
 }
 
 function packageFootprintPins(layout: LayoutMaps, ref: string): string[] | undefined {
@@ -135,8 +174,9 @@ function packageFootprintPins(layout: LayoutMaps, ref: string): string[] | undef
 
 /** Spare package pins carry the nets the layout gave them (tied-off sections). */
 function applySpares(layout: LayoutMaps, parts: Map<string, ExpectedPart>, faults: Problem[]): void {
+  const copied = new Set<ExpectedPart>();
   for (const [ref, map] of Object.entries(layout.spares ?? {})) {
-    const e = parts.get(ref);
+    let e = parts.get(ref);
     if (!e) {
       faults.push(
         problem('verify.packing', 'error', ['spares', ref], `spares names ${ref}, which is neither a circuit part nor a package`, {
@@ -165,7 +205,15 @@ function applySpares(layout: LayoutMaps, parts: Map<string, ExpectedPart>, fault
             nets: [had, net],
           }),
         );
-      else e.nets[pin] = net;
+      else {
+        // expected parts of circuit parts are shared with the memo: change a copy
+        if (!copied.has(e)) {
+          e = { ...e, nets: bare(e.nets) };
+          copied.add(e);
+          parts.set(ref, e);
+        }
+        e.nets[pin] = net;
+      }
     }
   }
 }

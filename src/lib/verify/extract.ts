@@ -6,7 +6,7 @@
  * that is exactly one circuit net (the same pins, no others) takes that net's name and
  * `matched: true`; other classes are named N1, N2 … (skipping circuit net names), and
  * `diff` says how the board differs from the circuit. `expectedNetlist(circuit, layout?)`
- * → the circuit's nets at package level (op-amp sections read through the layout's
+ * → the circuit's nets at package level in name order (op-amp sections read through the layout's
  * packing). `diffNetlists(expected, found)` compares any two netlists by their pins.
  */
 import { holeIndex, onBoard } from '../board/index.ts';
@@ -21,7 +21,7 @@ const key = (p: PinRef) => `${p.ref}\u0000${p.pin}`;
 
 export function expectedNetlist(circuit: Circuit, layout?: Pick<Layout, 'parts' | 'packing' | 'spares'>): NamedNet[] {
   const e = readExpected(circuit, layout ?? { parts: [] });
-  return [...e.nets.entries()].map(([name, pins]) => ({ name, pins: pins.map((p) => ({ ...p })) }));
+  return [...e.nets.entries()].sort((a, b) => (a[0] < b[0] ? -1 : a[0] > b[0] ? 1 : 0)).map(([name, pins]) => ({ name, pins: pins.map((p) => ({ ...p })) }));
 }
 
 export function extractNetlist(layout: Layout, circuit?: Circuit): ExtractedNetlist {

@@ -3,6 +3,10 @@
  * some allowed rotation (fitPose)? When not, say why in bench terms: a two-lead span out
  * of range, a mirror image (numbered clockwise seen from the component side), or the shape
  * the footprint needs. Also the circuit's own span limit.
+ *
+ * `fitGeometry(fp, spots, e, path)` → `{ found, first, body, faults }`: `found` when the pins
+ * keep a pose the footprint and the circuit allow (`body`: the body cells as offsets from
+ * the first footprint pin at `first`, flattened dx, dy).
  */
 import type { Problem } from '../model/problem.ts';
 import { fitPose, poseBody, type Footprint, type Offset, type Pose } from '../parts/index.ts';
@@ -12,80 +16,145 @@ import { problem } from './words.ts';
 /** Longest lead span tried when explaining an out-of-range span, in holes. */
 const WIDEST_SPAN = 400;
 
-/** A fit found for one shape of pins, relative to the first pin (so it can be reused). */
-interface Fit {
-  pose?: { rotation: number; span?: number; anchor: Offset };
-  /** Body cells relative to the first pin. */
-  body: Offset[];
+/** Where a part's pins sit: `names[i]` at `at[i]` (undefined where not placed). */
+export interface Spots {
+  names: readonly string[];
+  at: (Offset | undefined)[];
 }
 
-const fits = new Map<string, Fit>();
+export function spotOf(s: Spots, name: string): Offset | undefined {
+  const i = s.names.indexOf(name);
+  return i < 0 ? undefined : s.at[i];
+}
+
+/** The pose found for one shape of pins, relative to the first pin (so it can be reused). */
+interface Fit {
+  found: boolean;
+  span?: number;
+  /** Body cells relative to the first pin: dx, dy pairs. */
+  body: Int32Array;
+}
+
+/** Remembered fits, per footprint, in a tree keyed by each further pin's offset from the first. */
+interface Node {
+  next?: Map<number, Node>;
+  fit?: Fit;
+}
+let fits = new WeakMap<Footprint, Node>();
+let remembered = 0;
 /** Bound on remembered shapes. */
 const MAX_FITS = 4096;
+/** Offsets up to this far (exclusive) are packed into one key. */
+const REACH = 32768;
+
+const NO_BODY = new Int32Array(0);
 
 /**
- * The pose and body of a footprint for placed pins. Parts of one footprint placed in one
- * shape share the answer, remembered by the pins' offsets from the first pin.
+ * The fit of a footprint for placed pins (all of fp.pinNames placed). Parts of one
+ * footprint placed in one shape share the answer.
  */
-export function fitShape(fp: Footprint, pins: Record<string, Offset>): { pose?: Pose; body: Offset[] } {
-  const first = pins[fp.pinNames[0]!];
-  if (!first) return { body: [] };
-  let key = `${fp.name}\u0000${fp.pinNames.join('\u0001')}`;
-  for (const n of fp.pinNames) {
-    const p = pins[n];
-    key += p ? `|${p[0] - first[0]},${p[1] - first[1]}` : '|-';
-  }
-  let fit = fits.get(key);
-  if (!fit) {
-    const pose = fitAnySpan(fp, pins);
-    fit = { body: [] };
-    if (pose) {
-      fit.pose = { rotation: pose.rotation, anchor: [pose.anchor[0] - first[0], pose.anchor[1] - first[1]] };
-      if (pose.span !== undefined) fit.pose.span = pose.span;
-      fit.body = poseBody(fp, pose).map((h) => [h[0] - first[0], h[1] - first[1]] as Offset);
+function fitShape(fp: Footprint, spots: Spots, first: Offset): Fit {
+  let node = fits.get(fp);
+  if (!node) fits.set(fp, (node = {}));
+  for (let k = 1; k < fp.pinNames.length && node; k++) {
+    const p = spotOf(spots, fp.pinNames[k]!)!;
+    const dx = p[0] - first[0];
+    const dy = p[1] - first[1];
+    if (!(Number.isInteger(dx) && Number.isInteger(dy) && Math.abs(dx) < REACH && Math.abs(dy) < REACH)) node = undefined;
+    else {
+      const key = (dx + REACH) * 2 * REACH + (dy + REACH);
+      node.next ??= new Map();
+      let child = node.next.get(key);
+      if (!child) node.next.set(key, (child = {}));
+      node = child;
     }
-    if (fits.size >= MAX_FITS) fits.clear();
-    fits.set(key, fit);
   }
-  if (!fit.pose) return { body: [] };
-  const pose: Pose = { anchor: [first[0] + fit.pose.anchor[0], first[1] + fit.pose.anchor[1]], rotation: fit.pose.rotation };
-  if (fit.pose.span !== undefined) pose.span = fit.pose.span;
-  return { pose, body: fit.body.map((o) => [first[0] + o[0], first[1] + o[1]] as Offset) };
+  if (node?.fit) return node.fit;
+  const fit = computeFit(fp, spots, first);
+  if (node) {
+    if (++remembered > MAX_FITS) {
+      fits = new WeakMap();
+      remembered = 0;
+    } else node.fit = fit;
+  }
+  return fit;
 }
 
-export function fitGeometry(fp: Footprint, pins: Record<string, Offset>, e: ExpectedPart, path: (string | number)[]): { pose?: Pose; body: Offset[]; faults: Problem[] } {
+function computeFit(fp: Footprint, spots: Spots, first: Offset): Fit {
+  const pose = fitAnySpan(fp, recordOf(spots));
+  if (!pose) return { found: false, body: NO_BODY };
+  const cells = poseBody(fp, pose);
+  const body = new Int32Array(2 * cells.length);
+  cells.forEach((h, k) => {
+    body[2 * k] = h[0] - first[0];
+    body[2 * k + 1] = h[1] - first[1];
+  });
+  const fit: Fit = { found: true, body };
+  if (pose.span !== undefined) fit.span = pose.span;
+  return fit;
+}
+
+/** The spots as a name → hole record (no prototype: pin names are user text). */
+function recordOf(spots: Spots): Record<string, Offset> {
+  const out = Object.create(null) as Record<string, Offset>;
+  spots.names.forEach((n, i) => {
+    const at = spots.at[i];
+    if (at && !(n in out)) out[n] = at;
+  });
+  return out;
+}
+
+export interface Geometry {
+  found: boolean;
+  /** Where the first footprint pin sits. */
+  first: Offset;
+  body: Int32Array;
+  faults: Problem[];
+}
+
+function fault(ref: string, path: (string | number)[], message: string, hint: string): Problem {
+  return problem('verify.geometry', 'error', path, message, { hint, refs: [ref] });
+}
+
+export function fitGeometry(fp: Footprint, spots: Spots, e: ExpectedPart, path: (string | number)[]): Geometry {
   const ref = e.ref;
-  const fault = (message: string, hint: string) => problem('verify.geometry', 'error', path, message, { hint, refs: [ref] });
-  const shaped = fitShape(fp, pins);
-  const found = shaped.pose;
-  const body = shaped.body;
-  if (found?.span !== undefined && fp.span && (found.span < fp.span.min || found.span > fp.span.max))
+  const first = spotOf(spots, fp.pinNames[0]!)!;
+  const fit = fitShape(fp, spots, first);
+  const span = fit.span;
+  if (fit.found && span !== undefined && fp.span && (span < fp.span.min || span > fp.span.max))
     return {
-      body: [],
-      faults: [fault(`${ref} leads are ${found.span} holes apart; a ${fp.name} body takes ${fp.span.min}–${fp.span.max}`, `move one lead so the span is ${fp.span.min}–${fp.span.max} holes, or pick another footprint`)],
+      found: false,
+      first,
+      body: NO_BODY,
+      faults: [fault(ref, path, `${ref} leads are ${span} holes apart; a ${fp.name} body takes ${fp.span.min}–${fp.span.max}`, `move one lead so the span is ${fp.span.min}–${fp.span.max} holes, or pick another footprint`)],
     };
-  if (found) {
-    if (e.span && found.span !== undefined && (found.span < e.span.min || found.span > e.span.max))
+  if (fit.found) {
+    if (e.span && span !== undefined && (span < e.span.min || span > e.span.max))
       return {
-        pose: found,
-        body,
-        faults: [fault(`${ref} leads are ${found.span} holes apart; the circuit allows ${e.span.min}–${e.span.max}`, `move one lead so the span is ${e.span.min}–${e.span.max} holes`)],
+        found: true,
+        first,
+        body: fit.body,
+        faults: [fault(ref, path, `${ref} leads are ${span} holes apart; the circuit allows ${e.span.min}–${e.span.max}`, `move one lead so the span is ${e.span.min}–${e.span.max} holes`)],
       };
-    return { pose: found, body, faults: [] };
+    return { found: true, first, body: fit.body, faults: [] };
   }
-  const mirrored: Record<string, Offset> = {};
-  for (const [k, o] of Object.entries(pins)) mirrored[k] = [-o[0], o[1]];
+  const mirrored = Object.create(null) as Record<string, Offset>;
+  for (const [k, o] of Object.entries(recordOf(spots))) mirrored[k] = [-o[0], o[1]];
   if (fp.pinNames.length > 2 && fitPose(fp, mirrored))
     return {
-      body: [],
+      found: false,
+      first,
+      body: NO_BODY,
       faults: [
         fault(
+          ref,
+          path,
           `${ref} is placed as a mirror image of ${fp.name}: its pins run clockwise seen from the component side (as if drawn from the copper side)`,
           'swap the pins left to right: seen from the component side the numbering runs counter-clockwise from pin 1',
         ),
       ],
     };
-  return { body: [], faults: [fault(`${ref} pins do not keep the ${fp.name} shape: it needs ${shapeWords(fp)}`, `place the pins as ${fp.title} in any quarter turn`)] };
+  return { found: false, first, body: NO_BODY, faults: [fault(ref, path, `${ref} pins do not keep the ${fp.name} shape: it needs ${shapeWords(fp)}`, `place the pins as ${fp.title} in any quarter turn`)] };
 }
 
 /**

@@ -7,13 +7,12 @@
  * ref is an op-amp section of the circuit, which belongs inside a package). Pure; the same layout
  * part always gives the same answer, which is what lets the incremental verifier cache it.
  */
-import { holeIndex, onBoard } from '../board/index.ts';
 import type { Board, LayoutPart } from '../model/layout.ts';
 import type { Hole, Problem } from '../model/problem.ts';
 import type { Footprint, Offset } from '../parts/index.ts';
 import { footprintNamed } from './footprints.ts';
 import type { ExpectedPart } from './expect.ts';
-import { fitGeometry } from './geometry.ts';
+import { fitGeometry, spotOf, type Spots } from './geometry.ts';
 import { at, listText, pinText, problem } from './words.ts';
 
 export interface PlacedPin {
@@ -42,13 +41,13 @@ export interface PlacedPart {
 
 export function placePart(lp: LayoutPart, index: number, e: ExpectedPart | undefined, duplicate: boolean, board: Board, section = false): PlacedPart {
   const path = ['parts', index];
-  const cols = board.cols;
+  const { cols, rows } = board;
   const faults: Problem[] = [];
   const warnings: Problem[] = [];
   const counted = !!e && !duplicate;
   const pins: PlacedPin[] = [];
-  // no prototype: pin names are user text ("constructor" must be just a name)
-  const firstAt = Object.create(null) as Record<string, Offset>;
+  // where each circuit pin is first placed, by its index in e.pinNames
+  const spots: Spots | undefined = e && { names: e.pinNames, at: new Array<Offset | undefined>(e.pinNames.length).fill(undefined) };
 
   if (!e)
     faults.push(
@@ -67,15 +66,18 @@ export function placePart(lp: LayoutPart, index: number, e: ExpectedPart | undef
       }),
     );
 
+  let body: number[] = [];
   for (let j = 0; j < lp.pins.length; j++) {
     const pp = lp.pins[j]!;
-    const pinPath = ['parts', index, 'pins', j];
-    const on = onBoard(board, pp.at);
-    const known = !!e && e.pinNames.includes(pp.pin);
-    const repeat = pp.pin in firstAt;
+    const x = pp.at[0];
+    const y = pp.at[1];
+    const on = x >= 0 && y >= 0 && x < cols && y < rows && Number.isInteger(x) && Number.isInteger(y);
+    const k = spots ? spots.names.indexOf(pp.pin) : -1;
+    const known = k >= 0;
+    const repeat = known && spots!.at[k] !== undefined;
     if (e && !known)
       faults.push(
-        problem('verify.unknown-pin', 'error', [...pinPath, 'pin'], `${lp.ref} has no pin "${pp.pin}" (its pins are ${listText(e.pinNames)})`, {
+        problem('verify.unknown-pin', 'error', ['parts', index, 'pins', j, 'pin'], `${lp.ref} has no pin "${pp.pin}" (its pins are ${listText(e.pinNames)})`, {
           hint: `use the pin names ${e.pinNames.join(', ')}`,
           refs: [lp.ref],
           holes: [pp.at],
@@ -83,7 +85,7 @@ export function placePart(lp: LayoutPart, index: number, e: ExpectedPart | undef
       );
     else if (e && repeat)
       faults.push(
-        problem('verify.duplicate-pin', 'error', [...pinPath, 'pin'], `${pinText(lp.ref, pp.pin)} is placed twice`, {
+        problem('verify.duplicate-pin', 'error', ['parts', index, 'pins', j, 'pin'], `${pinText(lp.ref, pp.pin)} is placed twice`, {
           hint: 'list each pin once',
           refs: [lp.ref],
           holes: [pp.at],
@@ -91,13 +93,14 @@ export function placePart(lp: LayoutPart, index: number, e: ExpectedPart | undef
       );
     if (!on)
       faults.push(
-        problem('verify.off-board', 'error', [...pinPath, 'at'], `${pinText(lp.ref, pp.pin)} at [${pp.at.join(', ')}] is off the ${board.cols}×${board.rows} board`, {
-          hint: `move ${lp.ref} inside the board (columns 0–${board.cols - 1}, rows 0–${board.rows - 1} in the document)`,
+        problem('verify.off-board', 'error', ['parts', index, 'pins', j, 'at'], `${pinText(lp.ref, pp.pin)} at [${pp.at.join(', ')}] is off the ${cols}×${rows} board`, {
+          hint: `move ${lp.ref} inside the board (columns 0–${cols - 1}, rows 0–${rows - 1} in the document)`,
           refs: [lp.ref],
         }),
       );
-    if (!repeat) firstAt[pp.pin] = [pp.at[0], pp.at[1]];
-    const pin: PlacedPin = { pin: pp.pin, j, hole: on ? holeIndex(board, pp.at) : -1, at: [pp.at[0], pp.at[1]], role: 'none' };
+    if (known && !repeat) spots!.at[k] = [x, y];
+    const hole = on ? x + y * cols : -1;
+    const pin: PlacedPin = { pin: pp.pin, j, hole, at: [x, y], role: 'none' };
     if (counted && known && !repeat) {
       const net = e.nets[pp.pin];
       if (net === undefined) pin.role = 'open';
@@ -107,12 +110,15 @@ export function placePart(lp: LayoutPart, index: number, e: ExpectedPart | undef
       }
     }
     pins.push(pin);
+    if (hole >= 0) body.push(hole);
   }
 
-  let body = pins.filter((p) => p.hole >= 0).map((p) => p.hole);
-  if (e) {
-    const missing = e.pinNames.filter((n) => !(n in firstAt));
-    if (missing.length)
+  if (e && spots) {
+    let missing: string[] | undefined;
+    spots.at.forEach((h, k) => {
+      if (!h) (missing ??= []).push(e.pinNames[k]!);
+    });
+    if (missing)
       faults.push(
         problem('verify.missing-pin', 'error', [...path, 'pins'], `${lp.ref} does not place pin${missing.length > 1 ? 's' : ''} ${listText(missing)}`, {
           hint: `place every pin of ${lp.ref}, unconnected ones included`,
@@ -120,57 +126,86 @@ export function placePart(lp: LayoutPart, index: number, e: ExpectedPart | undef
         }),
       );
     const fp = footprintOf(lp, e, path, faults);
-    if (fp && !missing.length) {
-      const fit = fitGeometry(fp, firstAt, e, [...path, 'pins']);
-      faults.push(...fit.faults);
-      if (fit.pose) body = fit.body.filter((h) => onBoard(board, h)).map((h) => holeIndex(board, h));
+    if (fp && !missing) {
+      const fit = fitGeometry(fp, spots, e, [...path, 'pins']);
+      for (const f of fit.faults) faults.push(f);
+      if (fit.found) {
+        body = [];
+        const [x0, y0] = fit.first;
+        for (let k = 0; k < fit.body.length; k += 2) {
+          const x = x0 + fit.body[k]!;
+          const y = y0 + fit.body[k + 1]!;
+          if (x >= 0 && y >= 0 && x < cols && y < rows && Number.isInteger(x) && Number.isInteger(y)) body.push(x + y * cols);
+        }
+      }
     }
-    if (fp && counted) warnings.push(...reminders(lp, e, fp, firstAt, path, cols));
+    if (fp && counted) reminders(lp, e, fp, spots, path, cols, warnings);
   }
-  body = uniqueSorted(body);
-  return { index, ref: lp.ref, counted, pins, body, faults, warnings };
+  return { index, ref: lp.ref, counted, pins, body: uniqueSorted(body), faults, warnings };
+}
+
+function geometryFault(lp: LayoutPart, path: (string | number)[], message: string, hint: string): Problem {
+  return problem('verify.geometry', 'error', [...path, 'footprint'], message, { hint, refs: [lp.ref] });
 }
 
 /** The layout's footprint, if it resolves with the part's pins and agrees with the circuit. */
 function footprintOf(lp: LayoutPart, e: ExpectedPart, path: (string | number)[], faults: Problem[]): Footprint | undefined {
-  const fault = (message: string, hint: string) => faults.push(problem('verify.geometry', 'error', [...path, 'footprint'], message, { hint, refs: [lp.ref] }));
   if (e.footprint && e.footprint !== lp.footprint) {
-    fault(`${lp.ref} is placed as ${lp.footprint}, but the circuit asks for ${e.footprint}`, `place ${lp.ref} with footprint ${e.footprint}`);
+    faults.push(geometryFault(lp, path, `${lp.ref} is placed as ${lp.footprint}, but the circuit asks for ${e.footprint}`, `place ${lp.ref} with footprint ${e.footprint}`));
     return undefined;
   }
   const fp = footprintNamed(lp.footprint, e.pinNames);
   const same = fp && fp.pinNames.length === e.pinNames.length && e.pinNames.every((n) => fp.pinNames.includes(n));
   if (!fp || !same) {
-    fault(
-      fp ? `${lp.ref}: footprint ${lp.footprint} has pins ${fp.pinNames.join(', ')} but the part has ${e.pinNames.join(', ')}` : `${lp.ref}: footprint "${lp.footprint}" is not in the library`,
-      'pick a footprint from `kerfline footprints` whose pins match the part',
+    faults.push(
+      geometryFault(
+        lp,
+        path,
+        fp ? `${lp.ref}: footprint ${lp.footprint} has pins ${fp.pinNames.join(', ')} but the part has ${e.pinNames.join(', ')}` : `${lp.ref}: footprint "${lp.footprint}" is not in the library`,
+        'pick a footprint from `kerfline footprints` whose pins match the part',
+      ),
     );
     return undefined;
   }
-  if (e.order && !e.order.defaulted && fp.pinNames.join('').toUpperCase() !== e.order.order) {
-    fault(`${lp.ref} is placed as ${fp.name} (leads ${fp.pinNames.join('-')}), but the circuit states the lead order ${e.order.order}`, `use the footprint whose lead order is ${e.order.order}`);
+  if (e.order && !e.order.defaulted && leadOrderOf(fp) !== e.order.order) {
+    faults.push(geometryFault(lp, path, `${lp.ref} is placed as ${fp.name} (leads ${fp.pinNames.join('-')}), but the circuit states the lead order ${e.order.order}`, `use the footprint whose lead order is ${e.order.order}`));
     return undefined;
   }
   return fp;
 }
 
-/** Polarity reminder, defaulted lead order, unconnected pins. */
-function reminders(lp: LayoutPart, e: ExpectedPart, fp: Footprint, pins: Record<string, Offset>, path: (string | number)[], cols: number): Problem[] {
-  const out: Problem[] = [];
-  const where = (pin: string) => (pins[pin] ? at(pins[pin], cols) : 'nowhere');
-  const holesOf = (names: string[]) => names.filter((n) => pins[n]).map((n) => pins[n]! as Hole);
+function leadOrderOf(fp: Footprint): string {
+  return fp.pinNames.join('').toUpperCase();
+}
+
+function where(spots: Spots, pin: string, cols: number): string {
+  const h = spotOf(spots, pin);
+  return h ? at(h, cols) : 'nowhere';
+}
+
+function holesOf(spots: Spots, names: string[]): Hole[] {
+  const out: Hole[] = [];
+  for (const n of names) {
+    const h = spotOf(spots, n);
+    if (h) out.push(h as Hole);
+  }
+  return out;
+}
+
+/** Polarity reminder, defaulted lead order, unconnected pins (into `out`). */
+function reminders(lp: LayoutPart, e: ExpectedPart, fp: Footprint, spots: Spots, path: (string | number)[], cols: number, out: Problem[]): void {
   if (e.polarized) {
     const marked: string[] = [];
-    if (fp.marks.plus) marked.push(`+ lead at ${where(fp.marks.plus)}`);
-    if (fp.marks.cathode) marked.push(`cathode (${fp.marks.cathode}) at ${where(fp.marks.cathode)}`);
-    if (fp.marks.pin1) marked.push(`pin ${fp.marks.pin1} (notch or dot end) at ${where(fp.marks.pin1)}`);
+    if (fp.marks.plus) marked.push(`+ lead at ${where(spots, fp.marks.plus, cols)}`);
+    if (fp.marks.cathode) marked.push(`cathode (${fp.marks.cathode}) at ${where(spots, fp.marks.cathode, cols)}`);
+    if (fp.marks.pin1) marked.push(`pin ${fp.marks.pin1} (notch or dot end) at ${where(spots, fp.marks.pin1, cols)}`);
     const names = marked.length ? [fp.marks.plus, fp.marks.cathode, fp.marks.pin1].filter((n): n is string => !!n) : fp.pinNames;
-    const text = marked.length ? listText(marked) : fp.pinNames.map((n) => `${n} at ${where(n)}`).join(', ');
+    const text = marked.length ? listText(marked) : fp.pinNames.map((n) => `${n} at ${where(spots, n, cols)}`).join(', ');
     out.push(
       problem('verify.polarity', 'note', path, `${lp.ref} fits one way round: ${text}`, {
         hint: 'check the marking on the part against these holes before soldering',
         refs: [lp.ref],
-        holes: holesOf(names),
+        holes: holesOf(spots, names),
       }),
     );
   }
@@ -181,22 +216,30 @@ function reminders(lp: LayoutPart, e: ExpectedPart, fp: Footprint, pins: Record<
         refs: [lp.ref],
       }),
     );
+  if (!e.openAllowed) return;
   const open = e.pinNames.filter((n) => e.nets[n] === undefined);
-  if (open.length && e.openAllowed)
+  if (open.length)
     out.push(
-      problem('verify.unconnected-pin', 'warning', path, `${lp.ref} leaves ${open.length > 1 ? 'pins' : 'pin'} ${listText(open)} unconnected (${listText(open.map(where))})`, {
+      problem('verify.unconnected-pin', 'warning', path, `${lp.ref} leaves ${open.length > 1 ? 'pins' : 'pin'} ${listText(open)} unconnected (${listText(open.map((n) => where(spots, n, cols)))})`, {
         hint: 'no copper of another pin may touch these holes; tie unused inputs off in the circuit if the part needs it',
         refs: [lp.ref],
-        holes: holesOf(open),
+        holes: holesOf(spots, open),
         pins: open.map((pin) => ({ ref: lp.ref, pin })),
       }),
     );
-  return out;
 }
 
-/** Ascending, without repeats (bodies are a handful of holes). */
+/** Ascending, without repeats (bodies are a handful of holes: insertion sort). */
 function uniqueSorted(xs: number[]): number[] {
-  xs.sort((a, b) => a - b);
+  for (let i = 1; i < xs.length; i++) {
+    const v = xs[i]!;
+    let j = i - 1;
+    while (j >= 0 && xs[j]! > v) {
+      xs[j + 1] = xs[j]!;
+      j--;
+    }
+    xs[j + 1] = v;
+  }
   let n = 0;
   for (let i = 0; i < xs.length; i++) if (i === 0 || xs[i] !== xs[n - 1]) xs[n++] = xs[i]!;
   xs.length = n;

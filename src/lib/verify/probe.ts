@@ -30,7 +30,7 @@ export function probeChecklist(circuit: Circuit, layout: Layout): ProbeChecklist
   const expected = readExpected(circuit, layout);
 
   const isLead = new Uint8Array(size);
-  for (const h of stage.linkEnds.keys()) isLead[h] = 1;
+  for (let h = 0; h < size; h++) if (stage.linkEnds.count[h]) isLead[h] = 1;
   const labels = new Map<number, Set<string>>();
   const seen = new Set<string>();
   for (const lp of layout.parts) {
@@ -111,7 +111,9 @@ export function probeChecklist(circuit: Circuit, layout: Layout): ProbeChecklist
 
   const silent: ProbePair[] = [];
   const done = new Set<string>();
-  for (const side of copper.cutSides) {
+  const sides = copper.cutSides;
+  for (let t = 0; t < sides.length; t += 3) {
+    const side = { cut: sides[t]!, a: sides[t + 1]!, b: sides[t + 2]! };
     const [ca, cb] = [cls[side.a]!, cls[side.b]!];
     const [na, nb] = [nameOf(ca), nameOf(cb)];
     if (ca === cb || na === undefined || nb === undefined || na === nb) continue;

@@ -7,6 +7,7 @@
 import { holeIndex, onBoard } from '../board/index.ts';
 import type { Board, Cut, Segment } from '../model/layout.ts';
 import { buildCopper, type Copper } from './copper.ts';
+import { HoleLists } from './hole-lists.ts';
 import { buildJoins, type Joins } from './joins.ts';
 
 /** A lead through a hole: a part's pin or a link end. */
@@ -19,8 +20,8 @@ export interface Stage {
   wires: Segment[];
   copper: Copper;
   joins: Joins;
-  /** hole → link ends in it. */
-  linkEnds: Map<number, Lead[]>;
+  /** hole → link ends in it (`a` the link index, `b` 0 for its start, 1 for its end). */
+  linkEnds: HoleLists;
   /** hole lists per class (built on first use). */
   classHoles?: Map<number, number[]>;
   /** adjacency of holes by copper, link and wire steps (built on first use). */
@@ -40,13 +41,10 @@ export interface HoleGraph {
 export function buildStage(board: Board, cuts: Cut[], links: Segment[], wires: Segment[]): Stage {
   const copper = buildCopper(board, cuts);
   const joins = buildJoins(board, copper, links, wires);
-  const linkEnds = new Map<number, Lead[]>();
+  const linkEnds = new HoleLists(copper.size);
   links.forEach((l, k) => {
-    for (const end of ['from', 'to'] as const) {
-      if (!onBoard(board, l[end])) continue;
-      const i = holeIndex(board, l[end]);
-      (linkEnds.get(i) ?? linkEnds.set(i, []).get(i)!).push({ kind: 'link', link: k, end });
-    }
+    if (onBoard(board, l.from)) linkEnds.add(holeIndex(board, l.from), k, 0);
+    if (onBoard(board, l.to)) linkEnds.add(holeIndex(board, l.to), k, 1);
   });
   return { board, cuts, links, wires, copper, joins, linkEnds };
 }

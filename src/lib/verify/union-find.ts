@@ -6,20 +6,10 @@ export class UnionFind {
   private readonly parent: Int32Array;
   private readonly size: Int32Array;
 
-  constructor(n: number, from?: UnionFind) {
-    if (from) {
-      this.parent = from.parent.slice();
-      this.size = from.size.slice();
-      return;
-    }
+  constructor(n: number) {
     this.parent = new Int32Array(n);
     this.size = new Int32Array(n).fill(1);
     for (let i = 0; i < n; i++) this.parent[i] = i;
-  }
-
-  /** An independent copy, to join further without touching this one. */
-  clone(): UnionFind {
-    return new UnionFind(this.parent.length, this);
   }
 
   find(i: number): number {
@@ -39,12 +29,5 @@ export class UnionFind {
     this.parent[rb] = ra;
     this.size[ra] = this.size[ra]! + this.size[rb]!;
     return true;
-  }
-
-  /** Representative of every id, as one array (a snapshot). */
-  roots(): Int32Array {
-    const out = new Int32Array(this.parent.length);
-    for (let i = 0; i < out.length; i++) out[i] = this.find(i);
-    return out;
   }
 }

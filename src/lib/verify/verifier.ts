@@ -11,6 +11,7 @@ import type { Circuit } from '../model/circuit.ts';
 import type { Cut, Layout, LayoutPart, Segment } from '../model/layout.ts';
 import type { Problem } from '../model/problem.ts';
 import { readExpected, type Expected } from './expect.ts';
+import { HoleLists } from './hole-lists.ts';
 import { leadFaults } from './leads.ts';
 import { openFault, openLabel, shortFault, type PinEntry } from './nets.ts';
 import { linkEndInBody, linkOverBody, pairOverlap } from './overlap.ts';
@@ -22,25 +23,26 @@ import { canonical, problem } from './words.ts';
 interface State {
   stage: Stage;
   expected: Expected;
-  packKey: string;
+  /** Packing and spares as text, and a snapshot of each part (ref, footprint, pins) to spot unnamed changes; kept for recheck only. */
+  packKey?: string;
+  snap?: string[];
   /** Circuit parts the layout does not place. */
   missing: Problem[];
-  /** Snapshot of each part's ref, footprint and pins, to spot unnamed changes. */
-  snap: string[];
   refs: string[];
   parts: PlacedPart[];
-  /** hole → leads (pins and link ends). */
-  leadsAt: Map<number, Lead[]>;
-  /** hole → parts whose body covers it. */
-  bodyAt: Map<number, number[]>;
+  /** hole → leads: pins (`a` part index, `b` pin index) and link ends (`a` −1 − link, `b` 0 start, 1 end). */
+  leads: HoleLists;
+  /** hole → parts whose body covers it (`a` part index). */
+  bodyAt: HoleLists;
   /** net → its counted, placed pins. */
   netPins: Map<string, PinEntry[]>;
   /** class → counted pins in it. */
   classPins: Map<number, PinEntry[]>;
   leadF: Map<number, Problem[]>;
-  pairF: Map<string, Problem>;
-  linkBodyF: Map<string, Problem>;
-  linkOverW: Map<string, Problem>;
+  /** Faults keyed by pairKey of (part, part), (link end, part) and (link, part). */
+  pairF: Map<number, Problem>;
+  linkBodyF: Map<number, Problem>;
+  linkOverW: Map<number, Problem>;
   openF: Map<string, Problem>;
   shortF: Map<number, Problem>;
 }
@@ -52,7 +54,7 @@ export function createVerifier(circuit: Circuit): Verifier {
   const check = (layout: Layout): VerifyReport => {
     // the stage keeps its own copy of the copper documents: a caller may edit its layout in place
     const stage = state && sameStage(state.stage, layout) ? state.stage : buildStage(...copperDocs(layout));
-    state = build(circuit, layout, stage);
+    state = build(circuit, layout, stage, true);
     return report(state);
   };
   const recheck = (layout: Layout, changedRefs: string[]): VerifyReport => {
@@ -62,7 +64,7 @@ export function createVerifier(circuit: Circuit): Verifier {
     const named = new Set(changedRefs);
     const changed: number[] = [];
     layout.parts.forEach((p, i) => {
-      if (named.has(p.ref) || snapOf(p) !== s.snap[i]) changed.push(i);
+      if (named.has(p.ref) || snapOf(p) !== s.snap![i]) changed.push(i);
     });
     if (changed.some((i) => s.expected.parts.get(s.refs[i]!)?.packed)) return check(layout);
     update(s, layout, changed);
@@ -73,7 +75,7 @@ export function createVerifier(circuit: Circuit): Verifier {
 
 /** One full check with nothing kept (what verifyLayout does). */
 export function checkOnce(circuit: Circuit, layout: Layout): VerifyReport {
-  return report(build(circuit, layout, buildStage(layout.board, layout.cuts, layout.links, layout.wires)));
+  return report(build(circuit, layout, buildStage(layout.board, layout.cuts, layout.links, layout.wires), false));
 }
 
 /** Fresh copies of the board, cuts, links and wires. */
@@ -111,18 +113,17 @@ function same(a: unknown, b: unknown): boolean {
   return true;
 }
 
-function build(circuit: Circuit, layout: Layout, stage: Stage): State {
+function build(circuit: Circuit, layout: Layout, stage: Stage, keep: boolean): State {
   const expected = readExpected(circuit, layout);
+  const size = stage.copper.size;
   const s: State = {
     stage,
     expected,
-    packKey: packKey(layout),
     missing: missingParts(expected, layout),
-    snap: layout.parts.map(snapOf),
     refs: layout.parts.map((p) => p.ref),
     parts: [],
-    leadsAt: new Map([...stage.linkEnds].map(([h, l]) => [h, [...l]])),
-    bodyAt: new Map(),
+    leads: new HoleLists(size, 4 * layout.parts.length + 2 * stage.links.length + 16),
+    bodyAt: new HoleLists(size, 8 * layout.parts.length + 16),
     netPins: new Map(),
     classPins: new Map(),
     leadF: new Map(),
@@ -132,6 +133,12 @@ function build(circuit: Circuit, layout: Layout, stage: Stage): State {
     openF: new Map(),
     shortF: new Map(),
   };
+  if (keep) {
+    s.packKey = packKey(layout);
+    s.snap = layout.parts.map(snapOf);
+  }
+  const ends = stage.linkEnds;
+  for (let h = 0; h < size; h++) for (let k = ends.head[h]!; k >= 0; k = ends.next[k]!) s.leads.add(h, -1 - ends.a[k]!, ends.b[k]!);
   const firstOf = new Map<string, number>();
   layout.parts.forEach((lp, i) => {
     if (!firstOf.has(lp.ref)) firstOf.set(lp.ref, i);
@@ -140,11 +147,27 @@ function build(circuit: Circuit, layout: Layout, stage: Stage): State {
     addPart(s, p);
   });
   const cutAt = stage.copper.cutAt;
-  for (const [h, leads] of s.leadsAt) setList(s.leadF, h, leadFaults(h, leads, !!cutAt[h], layout.board.cols));
+  const count = s.leads.count;
+  for (let h = 0; h < size; h++) if (count[h]! > 1 || (count[h] && cutAt[h])) setList(s.leadF, h, leadFaults(h, leadsIn(s, h), !!cutAt[h], layout.board.cols));
   for (const p of s.parts) partPairs(s, p);
   for (const c of s.classPins.keys()) redoShort(s, c);
   for (const net of expected.nets.keys()) redoOpen(s, net);
   return s;
+}
+
+/** The leads in hole h, as leads.ts names them. */
+function leadsIn(s: State, h: number): Lead[] {
+  const out: Lead[] = [];
+  const l = s.leads;
+  for (let k = l.head[h]!; k >= 0; k = l.next[k]!) {
+    const a = l.a[k]!;
+    if (a < 0) out.push({ kind: 'link', link: -1 - a, end: l.b[k] ? 'to' : 'from' });
+    else {
+      const p = s.parts[a]!;
+      out.push({ kind: 'pin', part: a, j: l.b[k]!, ref: p.ref, pin: p.pins[l.b[k]!]!.pin });
+    }
+  }
+  return out;
 }
 
 function missingParts(expected: Expected, layout: Layout): Problem[] {
@@ -153,7 +176,7 @@ function missingParts(expected: Expected, layout: Layout): Problem[] {
   for (const e of expected.parts.values())
     if (!placed.has(e.ref))
       out.push(
-        problem('verify.missing-part', 'error', e.path, e.packed ? `package ${e.ref}, which the packing fills with op-amp sections, is not on the board` : `${e.ref} (${e.describe}) is in the circuit but not on the board`, {
+        problem('verify.missing-part', 'error', [...e.path], e.packed ? `package ${e.ref}, which the packing fills with op-amp sections, is not on the board` : `${e.ref} (${e.describe}) is in the circuit but not on the board`, {
           hint: `place ${e.ref} on the board`,
           refs: [e.ref],
         }),
@@ -183,7 +206,7 @@ function update(s: State, layout: Layout, changed: number[]): void {
     const ref = layout.parts[i]!.ref;
     const p = placePart(layout.parts[i]!, i, s.expected.parts.get(ref), s.refs.indexOf(ref) !== i, layout.board, s.expected.sections.has(ref));
     s.parts[i] = p;
-    s.snap[i] = snapOf(layout.parts[i]!);
+    s.snap![i] = snapOf(layout.parts[i]!);
     addPart(s, p);
     for (const q of p.pins) if (q.hole >= 0) leadHoles.add(q.hole);
     for (const h of p.body) classes.add(cls[h]!);
@@ -194,7 +217,7 @@ function update(s: State, layout: Layout, changed: number[]): void {
   }
   for (const i of changed) partPairs(s, s.parts[i]!, changedSet);
   const cutAt = s.stage.copper.cutAt;
-  for (const h of leadHoles) setList(s.leadF, h, leadFaults(h, s.leadsAt.get(h), !!cutAt[h], cols));
+  for (const h of leadHoles) setList(s.leadF, h, leadFaults(h, leadsIn(s, h), !!cutAt[h], cols));
   for (const c of classes) {
     redoShort(s, c);
     for (const e of s.classPins.get(c) ?? []) if (e.net !== undefined) nets.add(e.net);
@@ -206,7 +229,7 @@ function addPart(s: State, p: PlacedPart): void {
   const cls = s.stage.joins.cls;
   for (const q of p.pins) {
     if (q.hole < 0) continue;
-    push(s.leadsAt, q.hole, { kind: 'pin', part: p.index, j: q.j, ref: p.ref, pin: q.pin });
+    s.leads.add(q.hole, p.index, q.j);
     if (q.role === 'none') continue;
     const e: PinEntry = { ref: p.ref, pin: q.pin, hole: q.hole, label: q.net ?? openLabel(p.ref, q.pin) };
     if (q.net !== undefined) {
@@ -215,52 +238,61 @@ function addPart(s: State, p: PlacedPart): void {
     }
     push(s.classPins, cls[q.hole]!, e);
   }
-  for (const h of p.body) push(s.bodyAt, h, p.index);
+  for (const h of p.body) s.bodyAt.add(h, p.index, 0);
 }
 
 function removePart(s: State, p: PlacedPart): void {
   const cls = s.stage.joins.cls;
   for (const q of p.pins) {
     if (q.hole < 0) continue;
-    pull(s.leadsAt, q.hole, (l) => l.kind === 'pin' && l.part === p.index && l.j === q.j);
+    s.leads.remove(q.hole, p.index, q.j);
     if (q.role === 'none') continue;
     if (q.net !== undefined) pull(s.netPins, q.net, (e) => e.ref === p.ref && e.pin === q.pin);
     pull(s.classPins, cls[q.hole]!, (e) => e.ref === p.ref && e.pin === q.pin);
   }
-  for (const h of p.body) pull(s.bodyAt, h, (k) => k === p.index);
+  for (const h of p.body) s.bodyAt.remove(h, p.index, 0);
 }
 
 /** Forget the pair, link-end and link-over results involving part p. */
 function dropPairs(s: State, p: PlacedPart): void {
+  const { bodyAt } = s;
+  const ends = s.stage.linkEnds;
+  const over = s.stage.joins.linkOver;
   for (const h of p.body) {
-    for (const q of s.bodyAt.get(h) ?? []) if (q !== p.index) s.pairF.delete(pairKey(p.index, q));
-    for (const l of s.stage.linkEnds.get(h) ?? []) if (l.kind === 'link') s.linkBodyF.delete(`${l.link}:${l.end}|${p.index}`);
-    for (const k of s.stage.joins.linkOver.get(h) ?? []) s.linkOverW.delete(`${k}|${p.index}`);
+    for (let k = bodyAt.head[h]!; k >= 0; k = bodyAt.next[k]!) if (bodyAt.a[k] !== p.index) s.pairF.delete(pairKey(p.index, bodyAt.a[k]!));
+    for (let k = ends.head[h]!; k >= 0; k = ends.next[k]!) s.linkBodyF.delete(key2(2 * ends.a[k]! + ends.b[k]!, p.index));
+    for (let k = over.head[h]!; k >= 0; k = over.next[k]!) s.linkOverW.delete(key2(over.a[k]!, p.index));
   }
 }
 
 /** Overlaps of p with other parts, link ends under p, links over p. */
 function partPairs(s: State, p: PlacedPart, changed?: Set<number>): void {
   const cols = s.stage.copper.cols;
-  const over = new Map<number, number[]>();
-  const others = new Set<number>();
+  const { bodyAt } = s;
+  const ends = s.stage.linkEnds;
+  const linkOver = s.stage.joins.linkOver;
+  let over: Map<number, number[]> | undefined;
+  let others: Set<number> | undefined;
   for (const h of p.body) {
-    for (const q of s.bodyAt.get(h) ?? []) if (q !== p.index) others.add(q);
-    for (const l of s.stage.linkEnds.get(h) ?? []) {
-      if (l.kind !== 'link') continue;
-      const f = linkEndInBody(l.link, l.end, h, p, cols);
-      if (f) s.linkBodyF.set(`${l.link}:${l.end}|${p.index}`, f);
+    if (bodyAt.count[h]! > 1)
+      for (let k = bodyAt.head[h]!; k >= 0; k = bodyAt.next[k]!) if (bodyAt.a[k] !== p.index) (others ??= new Set()).add(bodyAt.a[k]!);
+    for (let k = ends.head[h]!; k >= 0; k = ends.next[k]!) {
+      const link = ends.a[k]!;
+      const end = ends.b[k]!;
+      const f = linkEndInBody(link, end ? 'to' : 'from', h, p, cols);
+      if (f) s.linkBodyF.set(key2(2 * link + end, p.index), f);
     }
-    for (const k of s.stage.joins.linkOver.get(h) ?? []) push(over, k, h);
+    for (let k = linkOver.head[h]!; k >= 0; k = linkOver.next[k]!) push((over ??= new Map()), linkOver.a[k]!, h);
   }
-  for (const q of others) {
-    // in a full build each pair is met twice; the lower index does the work
-    if (!changed && q < p.index) continue;
-    const [a, b] = q < p.index ? [s.parts[q]!, p] : [p, s.parts[q]!];
-    const f = pairOverlap(a, b, cols);
-    if (f) s.pairF.set(pairKey(a.index, b.index), f);
-  }
-  for (const [k, cells] of over) s.linkOverW.set(`${k}|${p.index}`, linkOverBody(k, s.stage.links[k]!, cells, p, cols));
+  if (others)
+    for (const q of others) {
+      // in a full build each pair is met twice; the lower index does the work
+      if (!changed && q < p.index) continue;
+      const [a, b] = q < p.index ? [s.parts[q]!, p] : [p, s.parts[q]!];
+      const f = pairOverlap(a, b, cols);
+      if (f) s.pairF.set(pairKey(a.index, b.index), f);
+    }
+  if (over) for (const [k, cells] of over) s.linkOverW.set(key2(k, p.index), linkOverBody(k, s.stage.links[k]!, cells, p, cols));
 }
 
 function redoShort(s: State, c: number): void {
@@ -277,7 +309,7 @@ function redoOpen(s: State, net: string): void {
     return;
   }
   const cutAt = s.stage.copper.cutAt;
-  const isFree = (h: number) => !s.leadsAt.get(h)?.length && !cutAt[h] && !s.bodyAt.get(h)?.length;
+  const isFree = (h: number) => !s.leads.count[h] && !cutAt[h] && !s.bodyAt.count[h];
   const pure = (c: number) => (s.classPins.get(c) ?? []).every((e) => e.net === net);
   const f = openFault(net, placed, s.stage, isFree, pure);
   if (f) s.openF.set(net, f);
@@ -301,7 +333,9 @@ function report(s: State): VerifyReport {
   return { clean: faults.length === 0, faults, warnings };
 }
 
-const pairKey = (a: number, b: number) => (a < b ? `${a}|${b}` : `${b}|${a}`);
+/** One number for two indices below 2^26 (parts, links, link ends): exact in a double. */
+const key2 = (a: number, b: number) => a * 67108864 + b;
+const pairKey = (a: number, b: number) => (a < b ? key2(a, b) : key2(b, a));
 
 function push<K, V>(m: Map<K, V[]>, k: K, v: V): void {
   const l = m.get(k);

@@ -4,15 +4,30 @@ import type { Hole, Problem, Severity } from '../model/problem.ts';
 
 /** "C7 (copper C18)". */
 export function at(h: Hole, cols: number): string {
-  return holeLabelBoth(h, cols);
+  const x = h[0];
+  const y = h[1];
+  if (!(Number.isInteger(x) && Number.isInteger(y) && x >= 0 && x < cols && y >= 0)) return holeLabelBoth(h, cols);
+  if (labels.cols !== cols || labels.text.size >= MAX_LABELS) {
+    labels.cols = cols;
+    labels.text.clear();
+  }
+  const i = x + y * cols;
+  let got = labels.text.get(i);
+  if (got === undefined) labels.text.set(i, (got = holeLabelBoth(h, cols)));
+  return got;
 }
+
+/** Labels made so far, for one board width (the same few boards are checked again and again). */
+const labels = { cols: -1, text: new Map<number, string>() };
+/** Bound on remembered labels. */
+const MAX_LABELS = 65536;
 
 export function pinText(ref: string, pin: string): string {
   return `${ref} pin ${pin}`;
 }
 
 /** "a, b and c"; long lists end in "and N more". */
-export function listText(items: string[], max = 8): string {
+export function listText(items: readonly string[], max = 8): string {
   if (items.length <= 1) return items[0] ?? '';
   if (items.length > max) return `${items.slice(0, max).join(', ')} and ${items.length - max} more`;
   return `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
