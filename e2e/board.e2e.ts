@@ -157,6 +157,20 @@ describe('board screen', () => {
     await expect.poll(() => page.getByTestId('status').textContent()).toContain('cancelled');
   });
 
+  it('opens the printable bench guide for the board on screen, with its cut list and cautions', async () => {
+    const { page, context } = await app.open();
+    const layout = await layoutOf(page);
+    const [guide] = await Promise.all([context.waitForEvent('page'), page.getByTestId('open-guide').click()]);
+    await guide.waitForLoadState();
+    const text = (await guide.locator('body').textContent()) ?? '';
+    expect(text).toContain('Track cuts, copper side');
+    expect(text).toContain('mains');
+    // every cut of the layout is a tick-box line of the guide
+    expect(await guide.locator('input[type=checkbox], .tick').count()).toBeGreaterThanOrEqual(layout.cuts.length);
+    await expect.poll(() => page.getByTestId('status').textContent()).toContain('Bench guide opened');
+    await guide.close();
+  });
+
   it('keeps the help and the safety cautions one click away', async () => {
     const { page } = await app.open();
     await page.getByTestId('open-safety').click();
