@@ -16,6 +16,7 @@ import { PlanOptionsSchema, type Circuit, type CircuitPart, type Layout, type Pr
 import { prepareDesign } from '../src/lib/netlist/index.ts';
 import { routeLayout } from '../src/lib/route/index.ts';
 import { occupancy } from '../src/app/state/hit.ts';
+import { mulberry32 as rng } from '../src/lib/random/index.ts';
 
 const GOAL_MS = 16;
 const OPEN_RUNS = 5;
@@ -33,17 +34,6 @@ function pct(xs: number[], p: number): number {
 }
 const f1 = (v: number) => v.toFixed(1);
 
-/** Deterministic generator (mulberry32, public-domain algorithm). */
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /**
  * A routed layout of PARTS two-lead parts: a ladder (part i joins net N(i) to N(i+1)),

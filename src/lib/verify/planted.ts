@@ -11,20 +11,13 @@
 import type { Circuit, CircuitPart } from '../model/circuit.ts';
 import type { Cut, Layout, LayoutPart, Segment } from '../model/layout.ts';
 import { UnionFind } from './union-find.ts';
+import { mulberry32 } from '../random/index.ts';
+
+/** The planted layouts' seeded generator (shared mulberry32). */
+export const seededRandom = mulberry32;
 
 const TILE = 6;
 
-/** mulberry32: a small seeded generator (public-domain algorithm). */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 type Kind = 'r' | 'c' | 'e' | 'q' | 'u';
 

@@ -8,18 +8,11 @@
 import type { Board, Circuit, CircuitPart, Layout } from '../../model/index.ts';
 import { prepareDesign, type Design } from '../../netlist/index.ts';
 import { footprintFor, poseBody, posePins } from '../../parts/index.ts';
+import { mulberry32 } from '../../random/index.ts';
 
-/** mulberry32: a small seeded generator (public-domain algorithm by Tommy Ettinger). */
-export function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** The tests' seeded generator (shared mulberry32). */
+export const seeded = mulberry32;
+
 
 export interface RandomCase {
   circuit: Circuit;
