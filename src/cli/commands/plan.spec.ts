@@ -1,5 +1,5 @@
 /** `kerfline plan` through its run() function, output captured. */
-import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -45,6 +45,16 @@ describe('kerfline plan', () => {
     const r = await plan(circuitFile, '--board', 'strip:4x4', '--effort', 'quick', '--out', dir);
     expect(r.code).toBe(1);
     expect(r.err).toMatch(/no placement could be routed/);
+  });
+
+  it('exits 2 with a clear message when --out cannot be written', async () => {
+    // A plain file where the output folder should be: nothing can be written under it.
+    const blocker = join(dir, 'not-a-folder');
+    writeFileSync(blocker, 'x');
+    const r = await plan(circuitFile, '--effort', 'quick', '--out', join(blocker, 'sub'));
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/cannot write .*not-a-folder/);
+    expect(r.err).not.toMatch(/internal error/);
   });
 
   it('exits 2 on bad input or usage', async () => {

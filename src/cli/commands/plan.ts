@@ -14,14 +14,13 @@
  * Exit: 0 success, 1 no routable layout (with the reason), 2 bad input or usage.
  */
 import { basename, join } from 'node:path';
-import { writeFile, mkdir } from 'node:fs/promises';
 import { parseBoardSpec } from '../../lib/board/index.ts';
 import type { Layout, PlanOptionsInput, Problem } from '../../lib/model/index.ts';
 import type { Design } from '../../lib/netlist/index.ts';
 import { planLayout, type PlanProgress } from '../../lib/place/index.ts';
 import { drawScene } from '../../lib/render/index.ts';
 import { verifyLayout } from '../../lib/verify/index.ts';
-import { loadCircuit, printProblems, writeJsonFile } from '../io.ts';
+import { loadCircuit, printProblems, writeTextFile } from '../io.ts';
 import { sceneToSvgString } from '../svg-node.ts';
 
 const USAGE = 'usage: kerfline plan <circuit.json|netlist.cir> [--board strip:WxH|pads:WxH|bus:breadboard-N|auto] [--seed N] [--effort quick|normal|thorough] --out DIR\n';
@@ -145,11 +144,19 @@ export async function run(args: string[], out: Out = process.stdout, err: Out = 
     return 1;
   }
   const name = layoutName(a.circuit!);
-  await mkdir(a.out!, { recursive: true });
   const jsonPath = join(a.out!, `${name}.layout.json`);
   const svgPath = join(a.out!, `${name}.svg`);
-  await writeJsonFile(jsonPath, layout);
-  await writeFile(svgPath, bothSidesSvg(layout, planned.value.design), 'utf8');
+  // An --out that cannot be written is bad input (exit 2), not an internal error.
+  for (const [path, text] of [
+    [jsonPath, JSON.stringify(layout, null, 2) + '\n'],
+    [svgPath, bothSidesSvg(layout, planned.value.design)],
+  ] as const) {
+    const written = await writeTextFile(path, text);
+    if (!written.ok) {
+      printProblems(written.problems, err);
+      return 2;
+    }
+  }
   const b = stats.board;
   out.write(
     [

@@ -96,7 +96,6 @@ export function anneal(s: PlaceState, o: AnnealOptions): AnnealResult {
 
   const tryMove = (radius: number): { undo: () => void; delta: number } | undefined => {
     const m = proposeMove(ctx, radius);
-    (globalThis as any).__st ??= {}; const st = (globalThis as any).__st; const key = m ? (m.kind === 'gate' ? 'gate' : (m as any).tag ?? 'p') : 'none'; st[key] ??= [0,0]; st[key][0]++;
     if (!m) return undefined;
     if (m.kind === 'gate') {
       const g = { ...m, table: tableIndex[m.table]! };
@@ -112,7 +111,7 @@ export function anneal(s: PlaceState, o: AnnealOptions): AnnealResult {
       };
     }
     const old = m.parts.map((p) => s.spotOf(p));
-    if (!s.moveMany(m.parts, m.spots)) { (globalThis as any).__st[(m as any).tag ?? 'p'][1]++; return undefined; }
+    if (!s.moveMany(m.parts, m.spots)) return undefined;
     s.settle();
     const now = placementCost(s, o.weights).total;
     return {

@@ -139,9 +139,10 @@ export class CopperTally {
       for (let i = 0; i < old.length; i++) this.bump(old[i]!, -1, -oldStarved[i]!);
       this.cuts -= old.length > 1 ? old.length - 1 : 0;
       this.cramped -= this.crampedOf[c]!;
+      // Runs in copper order; each may use its own holes and the gaps on either side.
       const fresh: number[] = [];
-      const starts: number[] = [];
-      const ends: number[] = [];
+      const lo: number[] = [];
+      const hi: number[] = [];
       let last = -1;
       let lastPos = -2;
       let cramped = 0;
@@ -149,19 +150,19 @@ export class CopperTally {
         const net = v % NET_SPACE;
         const pos = (v - net) / NET_SPACE;
         if (net !== last) {
-          if (last !== -1 && pos - lastPos < 2) cramped++;
+          if (last !== -1) {
+            if (pos - lastPos < 2) cramped++;
+            hi.push(pos - 1);
+          }
           fresh.push(net);
-          starts.push(pos);
-          ends.push(pos);
-        } else ends[ends.length - 1] = pos;
+          lo.push(last === -1 ? 0 : lastPos + 1);
+        }
         last = net;
         lastPos = pos;
       }
-      // A segment may use its own free holes and those of the gaps on either side.
-      const len = this.map.holes[c]!.length;
-      const lo = fresh.map((_, i) => (i > 0 ? ends[i - 1]! + 1 : 0));
-      const hi = fresh.map((_, i) => (i + 1 < fresh.length ? starts[i + 1]! - 1 : len - 1));
-      const starved = fresh.map((_, i) => (this.isFree(c, lo[i]!, hi[i]!) ? 0 : 1));
+      if (fresh.length) hi.push(this.map.holes[c]!.length - 1);
+      const starved: number[] = [];
+      for (let i = 0; i < fresh.length; i++) starved.push(this.isFree(c, lo[i]!, hi[i]!) ? 0 : 1);
       this.runLo[c] = lo;
       this.runHi[c] = hi;
       for (let i = 0; i < fresh.length; i++) this.bump(fresh[i]!, 1, starved[i]!);

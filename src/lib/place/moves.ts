@@ -54,7 +54,7 @@ function hop(ctx: MoveContext, p: number): Move | undefined {
   const o = part.poses[pose]!.pins[pin]!;
   const tx = target % s.W;
   const ty = (target - tx) / s.W;
-  return { kind: 'parts', parts: [p], spots: [{ x: tx - o[0], y: ty - o[1], pose }], tag: 'hop' } as Move;
+  return { kind: 'parts', parts: [p], spots: [{ x: tx - o[0], y: ty - o[1], pose }] };
 }
 
 /** How deep a band of parts one slide moves (holes across the band). */
@@ -74,7 +74,7 @@ function slide(ctx: MoveContext): Move | undefined {
     parts.push(p);
     spots.push({ x: s.x[p]! + (vertical ? 0 : d), y: s.y[p]! + (vertical ? d : 0), pose: s.pose[p]! });
   }
-  return parts.length ? ({ kind: 'parts', parts, spots, tag: 'slide' } as Move) : undefined;
+  return parts.length ? { kind: 'parts', parts, spots } : undefined;
 }
 
 /** Up to a few tries for a move that is legal as far as a single part's own check tells. */
@@ -96,14 +96,14 @@ function proposeOnce(ctx: MoveContext, radius: number): Move | undefined {
     const dx = rng.int(2 * radius + 1) - radius;
     const dy = rng.int(2 * radius + 1) - radius;
     if (!dx && !dy) return undefined;
-    return { kind: 'parts', parts: [p], spots: [{ x: s.x[p]! + dx, y: s.y[p]! + dy, pose: s.pose[p]! }], tag: 'shift' } as Move;
+    return { kind: 'parts', parts: [p], spots: [{ x: s.x[p]! + dx, y: s.y[p]! + dy, pose: s.pose[p]! }] };
   }
   if (r < 0.5) {
     if (part.poses.length < 2) return undefined;
     const pose = rng.int(part.poses.length);
     const old = part.poses[s.pose[p]!]!.pins[0]!;
     const now = part.poses[pose]!.pins[0]!;
-    return { kind: 'parts', parts: [p], spots: [{ x: s.x[p]! + old[0] - now[0], y: s.y[p]! + old[1] - now[1], pose }], tag: 'pose' } as Move;
+    return { kind: 'parts', parts: [p], spots: [{ x: s.x[p]! + old[0] - now[0], y: s.y[p]! + old[1] - now[1], pose }] };
   }
   if (r < 0.75) return hop(ctx, p);
   if (r < 0.85) {
@@ -111,13 +111,13 @@ function proposeOnce(ctx: MoveContext, radius: number): Move | undefined {
     if (group) {
       const q = group[rng.int(group.length)]!;
       if (q === p) return undefined;
-      return { kind: 'parts', parts: [p, q], spots: [s.spotOf(q), s.spotOf(p)], tag: 'swap' } as Move;
+      return { kind: 'parts', parts: [p, q], spots: [s.spotOf(q), s.spotOf(p)] };
     }
     const q = movable[rng.int(movable.length)]!;
     if (q === p) return undefined;
     const a = centre(s, p, s.spotOf(p));
     const b = centre(s, q, s.spotOf(q));
-    return { kind: 'parts', parts: [p, q], spots: [at(s, p, s.pose[p]!, b.cx, b.cy), at(s, q, s.pose[q]!, a.cx, a.cy)], tag: 'trade' } as Move;
+    return { kind: 'parts', parts: [p, q], spots: [at(s, p, s.pose[p]!, b.cx, b.cy), at(s, q, s.pose[q]!, a.cx, a.cy)] };
   }
   if (r < 0.92 && ctx.tables.length) {
     const table = rng.int(ctx.tables.length);

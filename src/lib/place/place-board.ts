@@ -81,38 +81,52 @@ export function keepOutMask(board: Pick<Board, 'cols' | 'rows'>, keepOut: KeepOu
   return mask;
 }
 
+/** How a polish runs: share of a fresh annealing's steps, starting warmth, progress phase, link plan on or off. */
+export interface PolishTune {
+  share?: number;
+  warmth?: number;
+  phase?: string;
+  linkPlan?: boolean;
+}
+
 /**
- * Re-place a finished placement on another board (the working board cropped to size):
- * parts shifted by (dx, dy), gate swaps carried over, then a short cool anneal so the
- * cost sees the real board edges (landing holes and link lanes near them).
+ * Re-place a finished placement on another board (the working board cropped to size, or
+ * spread by free columns): parts shifted by (dx, dy) or put at the given spots, gate swaps
+ * carried over, then a short cool anneal so the cost sees the real board edges (landing
+ * holes and link lanes near them). `tune` scales it (default: POLISH of the steps, warmth
+ * WARMTH, the greedy link plan in the cost); a share of 0 only moves the placement.
  */
-export function polishOnBoard(problem: PlaceProblem, from: Placed, board: Board, dx: number, dy: number, set: BoardSettings): PlacedBoard {
+export function polishOnBoard(problem: PlaceProblem, from: Placed, board: Board, where: { dx: number; dy: number } | Spot[], set: BoardSettings, tune: PolishTune = {}): PlacedBoard {
   const state = new PlaceState(problem, copperMap(board), keepOutMask(board, set.keepOut), judgeLanes(problem, set));
   from.state.pinNet.forEach((nets, p) => nets.forEach((n, i) => state.setNet(p, i, n)));
   const locked = new Map<number, Spot>();
   const unplaced: number[] = [];
   problem.parts.forEach((_, p) => {
     const old = from.state.spotOf(p);
-    const spot = { x: old.x + dx, y: old.y + dy, pose: old.pose };
+    const spot = Array.isArray(where) ? where[p]! : { x: old.x + where.dx, y: old.y + where.dy, pose: old.pose };
     if (state.fits(p, spot)) state.place(p, spot);
     else unplaced.push(p);
     if (set.locked.has(p)) locked.set(p, spot);
   });
   if (unplaced.length) return { ok: false, unplaced };
   state.settle();
+  for (let n = 0; n < problem.nets.length; n++) if (from.state.tally.weight[n] !== 1) state.weighNet(n, from.state.tally.weight[n]!);
   const slotSections = from.slotSections.map((x) => x.slice());
   const effort = EFFORT_STEPS[set.effort];
+  const steps = Math.round((effort.floor + effort.perPart * problem.parts.length) * (tune.share ?? POLISH));
+  const withPlan = tune.linkPlan ?? true;
   const opts: Parameters<typeof anneal>[1] = {
     rng: createRng(set.seed).fork(3),
-    steps: Math.round((effort.floor + effort.perPart * problem.parts.length) * POLISH),
-    weights: { ...set.weights, shortfall: SHORTFALL },
+    steps,
+    weights: withPlan ? { ...set.weights, shortfall: SHORTFALL } : set.weights,
     locked: new Set(locked.keys()),
     tables: problem.sections,
     slotSections,
-    warmth: WARMTH,
-    focusNets: linkPlan(state).nets,
+    warmth: tune.warmth ?? WARMTH,
   };
-  if (set.onProgress) opts.onProgress = (f, c, b) => set.onProgress!('polish', f, c, b);
+  if (steps > 0) opts.focusNets = withPlan ? linkPlan(state).nets : [];
+  const phase = tune.phase ?? 'polish';
+  if (set.onProgress) opts.onProgress = (f, c, b) => set.onProgress!(phase, f, c, b);
   if (set.shouldStop) opts.shouldStop = set.shouldStop;
   return { ok: true, state, slotSections, anneal: anneal(state, opts) };
 }
@@ -121,7 +135,7 @@ export function polishOnBoard(problem: PlaceProblem, from: Placed, board: Board,
  * After the router named nets it could not join: weigh those nets' links and link room
  * `factor` times more and anneal the same placement again, cool and short.
  */
-export function reweighAndPolish(problem: PlaceProblem, placed: Placed, nets: number[], factor: number, set: BoardSettings): Placed {
+export function reweighAndPolish(problem: PlaceProblem, placed: Placed, nets: number[], factor: number, set: BoardSettings, withPlan = true): Placed {
   const state = placed.state;
   for (const n of nets) state.weighNet(n, state.tally.weight[n]! * factor);
   const locked = new Set<number>(set.locked.keys());
@@ -129,12 +143,12 @@ export function reweighAndPolish(problem: PlaceProblem, placed: Placed, nets: nu
   const opts: Parameters<typeof anneal>[1] = {
     rng: createRng(set.seed).fork(4 + nets.length),
     steps: Math.round((effort.floor + effort.perPart * problem.parts.length) * POLISH),
-    weights: { ...set.weights, shortfall: SHORTFALL },
+    weights: withPlan ? { ...set.weights, shortfall: SHORTFALL } : set.weights,
     locked,
     tables: problem.sections,
     slotSections: placed.slotSections,
     warmth: WARMTH,
-    focusNets: [...new Set([...nets, ...linkPlan(state).nets])],
+    focusNets: withPlan ? [...new Set([...nets, ...linkPlan(state).nets])] : nets,
   };
   if (set.onProgress) opts.onProgress = (f, c, b) => set.onProgress!('repair', f, c, b);
   if (set.shouldStop) opts.shouldStop = set.shouldStop;

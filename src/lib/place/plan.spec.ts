@@ -2,7 +2,10 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { verifyLayout } from '../verify/index.ts';
 import type { CircuitInput } from '../model/circuit.ts';
-import { planLayout } from './plan.ts';
+import { planLayout, planScore } from './plan.ts';
+import { circuitOfDesign } from './circuit-of-design.ts';
+import { plantedInstance } from './planted.ts';
+import { prepareDesign } from '../netlist/design.ts';
 import { circuitOf, designOf } from './test-kit.ts';
 
 // A small follower stage of our own (common practice values).
@@ -38,6 +41,25 @@ describe('planLayout', () => {
     const b = planned(follower, { effort: 'quick', seed: 5 });
     expect(a.ok && b.ok).toBe(true);
     if (a.ok && b.ok) expect(JSON.stringify(a.value.layout)).toBe(JSON.stringify(b.value.layout));
+  });
+
+  it('is never worse at normal effort than at quick for the same seed', () => {
+    for (const seed of [2, 7]) {
+      const quick = planned(follower, { effort: 'quick', seed });
+      const normal = planned(follower, { effort: 'normal', seed });
+      expect(quick.ok && normal.ok).toBe(true);
+      if (!quick.ok || !normal.ok) continue;
+      expect(normal.value.layout.meta).toMatchObject({ seed, effort: 'normal' });
+      expect(planScore(normal.value.stats, 2.54)).toBeLessThanOrEqual(planScore(quick.value.stats, 2.54));
+    }
+  });
+
+  it('plans a planted design (its circuit, ic packages included, rebuilds and verifies)', () => {
+    const inst = plantedInstance(16, 4);
+    expect(prepareDesign(circuitOfDesign(inst.design)).ok).toBe(true);
+    const r = planLayout(inst.design, { effort: 'quick' });
+    expect(r.ok).toBe(true);
+    if (r.ok) expect(verifyLayout(circuitOfDesign(inst.design), r.value.layout).clean).toBe(true);
   });
 
   it('verifies clean without being handed the circuit (rebuilt from the design)', () => {

@@ -12,17 +12,22 @@
  * the circuit to verify against (rebuilt from the design when absent).
  *
  * Each attempt places on a working board (placeOnBoard; small designs get two or three
- * independent placements at normal or thorough effort, tried best first), crops an auto board to the parts
- * plus a margin of 1, then 2 holes and polishes the placement there, routes (routeLayout)
- * and verifies (verifyLayout) from scratch. When the router names nets it could not join,
- * those nets weigh more and the placement is polished again (one repair round). A failed
- * attempt is retried on a bigger board (auto) or with the next seed, with a looser area
- * weight; when all fail the result is `place.no-layout` with every reason.
+ * independent placements at normal or thorough effort, tried best first), crops an auto
+ * board to the parts plus a margin of 1, then 2 holes and polishes the placement there (designs up
+ * to 50 parts; bigger ones are only moved), routes (routeLayout) and verifies
+ * (verifyLayout) from scratch. When the router names nets it could not join, the same
+ * placement gets a free column where a straight link could join them (spread.ts: cuts and
+ * links stay as they were), or else those nets weigh more and it is polished again — up to
+ * ROUNDS routings, each cheap next to a fresh annealing. A failed attempt is retried on a
+ * bigger board (auto) or with the next seed, with a looser area weight; when all fail the
+ * result is `place.no-layout` with every reason. Normal and thorough effort first plan as
+ * quick does, then carry on annealing from the quick placement for the rest of their steps
+ * and keep the better layout (planScore), so they are never worse than quick for a seed.
  */
 import type { Design } from '../netlist/design.ts';
 import type { Circuit } from '../model/circuit.ts';
 import type { Board, Layout } from '../model/layout.ts';
-import { PlanOptionsSchema, type PlanOptions, type PlanOptionsInput } from '../model/options.ts';
+import { PlanOptionsSchema, type Effort, type PlanOptions, type PlanOptionsInput } from '../model/options.ts';
 import { fail, ok, type Problem, type Result } from '../model/problem.ts';
 import { zodProblems } from '../model/parse.ts';
 import { breadboardBoard } from '../board/breadboard.ts';
@@ -34,7 +39,10 @@ import { circuitOfDesign } from './circuit-of-design.ts';
 import { DEFAULT_WEIGHTS, placementCost } from './cost.ts';
 import { lockedSpots } from './locked.ts';
 import { designAfterSwaps, placementLayout } from './output.ts';
-import { placeOnBoard, polishOnBoard, reweighAndPolish, type BoardSettings, type Placed } from './place-board.ts';
+import { EFFORT_STEPS, placeOnBoard, polishOnBoard, reweighAndPolish, type BoardSettings, type Placed } from './place-board.ts';
+import type { PlaceProblem } from './problem.ts';
+import { spreadColumns } from './spread.ts';
+import type { Spot } from './state.ts';
 import { buildProblem } from './problem.ts';
 import { cropBoard, workingBoard } from './board-size.ts';
 import { layoutStats, type PlanStats } from './stats.ts';
@@ -65,10 +73,13 @@ export interface PlanContext {
 
 /** Attempts before giving up: boards grow (auto) or seeds change (fixed board). */
 const ATTEMPTS = { auto: 6, fixed: 3 };
-/** Margins tried round an auto board's parts, and router-guided repair rounds per margin. */
+/** Margins tried round an auto board's parts when it is cropped to them. */
 const MARGINS = [1, 2];
-const REPAIRS = 1;
-/** How much more a net the router could not join weighs in each repair round. */
+/** Routing rounds per placement: after a failure the placement is spread by a free column or repaired. */
+const ROUNDS = 8;
+/** Designs up to this many parts are repaired before they are spread, with the greedy link plan in view. */
+const REPAIR_PARTS = 50;
+/** How much more a net the router could not join weighs in a repair round. */
 const REWEIGH = 3;
 /** Weight of two leads of different nets side by side when cuts are drilled at holes. */
 const CRAMPED = 25;
@@ -77,6 +88,10 @@ const PAD_AREA = 0.3;
 /** Independent placements per attempt by effort, for designs up to STARTS_PARTS parts. */
 const STARTS = { quick: 1, normal: 2, thorough: 3 };
 const STARTS_PARTS = 40;
+/** Designs up to this many parts polish on the cropped board (bigger ones only move there). */
+const POLISH_PARTS = 50;
+/** Starting warmth when a longer effort carries on from the quick placement: a full re-anneal (cooler starts gained nothing on the demos). */
+const CARRY_WARMTH = 1;
 export const PROGRAM = 'kerfline plan 0.1';
 
 function fixedBoard(choice: Exclude<PlanOptions['board'], 'auto'>): Board {
@@ -88,8 +103,157 @@ function boardName(b: Board): string {
   return `${b.kind} ${b.cols}×${b.rows}`;
 }
 
-function noLayout(message: string, reasons: string[], hint: string): Problem {
-  return { code: 'place.no-layout', severity: 'error', path: [], message: reasons.length ? `${message}: ${reasons.join('; ')}` : message, hint, data: { reasons } };
+/** Reasons shown in the message (all of them stay in `data.reasons`). */
+const SHOWN_REASONS = 5;
+
+function noLayout(message: string, all: string[], hint: string): Problem {
+  const reasons = [...new Set(all)];
+  const shown = reasons.slice(0, SHOWN_REASONS).join('; ') + (reasons.length > SHOWN_REASONS ? `; and ${reasons.length - SHOWN_REASONS} more` : '');
+  return { code: 'place.no-layout', severity: 'error', path: [], message: reasons.length ? `${message}: ${shown}` : message, hint, data: { reasons } };
+}
+
+/** What the builder pays for a finished layout, for choosing between two (weights of cost.ts). */
+export function planScore(st: PlanStats, pitchMm: number): number {
+  const w = DEFAULT_WEIGHTS;
+  return w.cut * st.cuts + w.link * st.links + w.length * (st.linkLengthMm / pitchMm) + w.area * st.holesUsed + w.wire * (st.wireLengthMm / pitchMm);
+}
+
+/** Everything one search needs, shared by the quick run and the longer one. */
+interface Env {
+  design: Design;
+  problem: PlaceProblem;
+  opts: PlanOptions;
+  locked: Map<number, Spot>;
+  circuit: Circuit;
+  auto: boolean;
+  /** The board of the previous layout, kept when locked parts pin the placement to it. */
+  previous?: Board;
+  reasons: string[];
+  progress: (phase: string, fraction: number, cost: number, best: number) => void;
+  stop: () => boolean;
+}
+
+/** A found layout, with the placement it came from (for a longer effort to carry on from). */
+interface Found {
+  planned: Planned;
+  warnings: Problem[];
+  score: number;
+  start: { placed: Placed; board: Board; attempt: number };
+}
+
+function settingsFor(env: Env, board: Board, attempt: number, effort: Effort): BoardSettings {
+  const { opts } = env;
+  return {
+    seed: (opts.seed + attempt * 7919) % 2 ** 31,
+    effort,
+    // Wires on a pad board need room between pads: the board area counts for less there.
+    // Each retry cares more for room to route than for a small board.
+    weights: {
+      ...DEFAULT_WEIGHTS,
+      supplyAtEdges: opts.supplyAtEdges,
+      area: DEFAULT_WEIGHTS.area * 0.6 ** attempt * (copperMap(board).padLike ? PAD_AREA : 1),
+      stranded: DEFAULT_WEIGHTS.stranded * (1 + attempt),
+      blocked: DEFAULT_WEIGHTS.blocked * (1 + attempt),
+      cramped: opts.cutStyle === 'hole' ? CRAMPED : 0,
+    },
+    locked: env.locked,
+    keepOut: opts.keepOut,
+    onProgress: env.progress,
+    shouldStop: env.stop,
+  };
+}
+
+/**
+ * Route a placement, verify it, and on a routing failure repair or spread it and try again
+ * (ROUNDS in all). Spreading (free columns, spread.ts) needs a board that may grow: auto,
+ * nothing locked, no keep-out areas.
+ */
+function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, attempt: number, steps: number): { planned: Planned; warnings: Problem[] } | undefined {
+  const { design, problem, opts } = env;
+  const canSpread = env.auto && !env.locked.size && !opts.keepOut.length;
+  let cur = first;
+  let frame = board;
+  let repaired = false;
+  for (let round = 0; round < ROUNDS; round++) {
+    const routedDesign = designAfterSwaps(design, cur.state, problem.sections, cur.slotSections);
+    const placement = placementLayout(cur.state, routedDesign, frame, new Set(env.locked.keys()));
+    env.progress('route', round / ROUNDS, cur.anneal.cost, cur.anneal.cost);
+    const routed = routeLayout(routedDesign, placement, { cutStyle: opts.cutStyle, linksOverBodies: opts.linksOverBodies });
+    if (routed.ok) {
+      env.progress('verify', 0, cur.anneal.cost, cur.anneal.cost);
+      const report = verifyLayout(env.circuit, routed.value.layout);
+      if (!report.clean) {
+        env.reasons.push(`${boardName(frame)}: the routed layout failed verification (${report.faults.map((f) => f.code).join(', ')})`);
+        return undefined;
+      }
+      const layout: Layout = { ...routed.value.layout, meta: { program: PROGRAM, seed: opts.seed, effort: opts.effort, attempt: attempt + 1 } };
+      const cost = placementCost(cur.state, set.weights).total;
+      const stats = layoutStats(layout, routed.value.stats, cost, problem.parts.length, attempt + 1, steps + cur.anneal.steps);
+      return { planned: { layout, design: routedDesign, stats }, warnings: report.warnings };
+    }
+    env.reasons.push(`${boardName(frame)}: ${routed.problems[0]?.message ?? 'did not route'}`);
+    if (round === ROUNDS - 1 || env.stop()) return undefined;
+    const nets = routed.problems.flatMap((p) => p.nets ?? []);
+    const ids = [...new Set(nets)].map((n) => problem.nets.findIndex((x) => x.name === n)).filter((i) => i >= 0);
+    // A free column where it lets a straight link join the failed nets; else (or on a
+    // board that may not grow, once) weigh those nets more and polish the placement again.
+    // Small designs are repaired first: a polish is cheap for them and keeps the board small.
+    const repairFirst = !repaired && problem.parts.length <= REPAIR_PARTS;
+    const wide = canSpread && !repairFirst ? spreadColumns(cur.state, frame, ids) : undefined;
+    const moved = wide && polishOnBoard(problem, cur, wide.board, wide.spots, set, { share: 0 });
+    if (wide && moved?.ok) {
+      cur = moved;
+      frame = wide.board;
+      continue;
+    }
+    if (repaired && !canSpread) return undefined;
+    repaired = true;
+    cur = reweighAndPolish(problem, cur, ids, REWEIGH, set, problem.parts.length <= REPAIR_PARTS);
+  }
+  return undefined;
+}
+
+/**
+ * One search at one effort: attempts on growing boards (auto) or further seeds, each with
+ * one or more placements tried best first. With `from`, the search carries on from a
+ * placement found before (the quick run's) on its board for the rest of this effort's steps.
+ */
+function search(env: Env, effort: Effort, from?: Found['start']): Found | undefined {
+  const { problem, opts } = env;
+  const first = from ? from.attempt : 0;
+  const last = from ? from.attempt + 1 : env.auto ? ATTEMPTS.auto : ATTEMPTS.fixed;
+  for (let attempt = first; attempt < last && !env.stop(); attempt++) {
+    const board = from ? from.board : opts.board !== 'auto' ? fixedBoard(opts.board) : env.auto ? workingBoard(problem, opts.autoKind, attempt) : { ...env.previous! };
+    const set = settingsFor(env, board, attempt, effort);
+    const candidates: Placed[] = [];
+    if (from) {
+      const done = EFFORT_STEPS.quick.floor + EFFORT_STEPS.quick.perPart * problem.parts.length;
+      const all = EFFORT_STEPS[effort].floor + EFFORT_STEPS[effort].perPart * problem.parts.length;
+      const more = polishOnBoard(problem, from.placed, board, { dx: 0, dy: 0 }, set, { share: Math.max(0, 1 - done / all), warmth: CARRY_WARMTH, phase: 'anneal', linkPlan: problem.parts.length <= POLISH_PARTS });
+      if (more.ok) candidates.push(more);
+    } else {
+      // Small designs at higher effort: several independent placements, best first.
+      const starts = problem.parts.length <= STARTS_PARTS ? STARTS[effort] : 1;
+      for (let k = 0; k < starts && !env.stop(); k++) {
+        const one = placeOnBoard(problem, board, { ...set, seed: (set.seed + k * 104729) % 2 ** 31 });
+        if (one.ok) candidates.push(one);
+        else if (k === 0) env.reasons.push(`${boardName(board)}: no room for ${one.unplaced.map((p) => problem.parts[p]!.ref).join(', ')}`);
+      }
+      candidates.sort((a, b) => a.anneal.cost - b.anneal.cost);
+    }
+    for (const placed of candidates) {
+      if (env.stop()) break;
+      const frames = env.auto ? MARGINS.map((m) => cropBoard(board, placed.state.bounds()!, m)) : [{ board, dx: 0, dy: 0 }];
+      for (const frame of frames) {
+        if (env.stop()) break;
+        const polished = polishOnBoard(problem, placed, frame.board, frame, set, problem.parts.length <= POLISH_PARTS ? {} : { share: 0 });
+        if (!polished.ok) continue;
+        const found = routeRounds(env, polished, frame.board, set, attempt, placed.anneal.steps);
+        if (found) return { ...found, score: planScore(found.planned.stats, frame.board.pitchMm), start: { placed, board, attempt } };
+      }
+    }
+  }
+  return undefined;
 }
 
 export function planLayout(design: Design, options: PlanOptionsInput, hooks: PlanHooks = {}, context: PlanContext = {}): Result<Planned> {
@@ -100,80 +264,34 @@ export function planLayout(design: Design, options: PlanOptionsInput, hooks: Pla
   const problem = buildProblem(design, opts);
   const locked = lockedSpots(problem, opts.locked, context.previous);
   if (!locked.ok) return fail(locked.problems);
-  const circuit = context.circuit ?? circuitOfDesign(design);
-  const progress = (phase: string, fraction: number, cost: number, best: number) => hooks.onProgress?.({ phase, fraction, cost, best });
-  const auto = opts.board === 'auto' && !(locked.value.size && context.previous);
-  const attempts = auto ? ATTEMPTS.auto : ATTEMPTS.fixed;
-  const reasons: string[] = [];
   let stopped = false;
-  for (let attempt = 0; attempt < attempts && !stopped; attempt++) {
-    const board = opts.board !== 'auto' ? fixedBoard(opts.board) : auto ? workingBoard(problem, opts.autoKind, attempt) : { ...context.previous!.board };
-    const set: BoardSettings = {
-      seed: (opts.seed + attempt * 7919) % 2 ** 31,
-      effort: opts.effort,
-      // Wires on a pad board need room between pads: the board area counts for less there.
-      // Each retry cares more for room to route than for a small board.
-      weights: {
-        ...DEFAULT_WEIGHTS,
-        supplyAtEdges: opts.supplyAtEdges,
-        area: DEFAULT_WEIGHTS.area * 0.6 ** attempt * (copperMap(board).padLike ? PAD_AREA : 1),
-        stranded: DEFAULT_WEIGHTS.stranded * (1 + attempt),
-        blocked: DEFAULT_WEIGHTS.blocked * (1 + attempt),
-        cramped: opts.cutStyle === 'hole' ? CRAMPED : 0,
-      },
-      locked: locked.value,
-      keepOut: opts.keepOut,
-      onProgress: progress,
-      shouldStop: () => (stopped ||= hooks.shouldStop?.() ?? false),
-    };
-    // Small designs at higher effort: several independent placements, best first.
-    const starts = problem.parts.length <= STARTS_PARTS ? STARTS[opts.effort] : 1;
-    const candidates: Placed[] = [];
-    for (let k = 0; k < starts && !stopped; k++) {
-      const one = placeOnBoard(problem, board, { ...set, seed: (set.seed + k * 104729) % 2 ** 31 });
-      if (one.ok) candidates.push(one);
-      else if (k === 0) reasons.push(`${boardName(board)}: no room for ${one.unplaced.map((p) => problem.parts[p]!.ref).join(', ')}`);
-    }
-    candidates.sort((a, b) => a.anneal.cost - b.anneal.cost);
-    for (const placed of candidates) {
-      const box = placed.state.bounds()!;
-      const frames = auto ? MARGINS.map((m) => cropBoard(board, box, m)) : [{ board, dx: 0, dy: 0 }];
-      for (const frame of frames) {
-        if (stopped) break;
-        const first = polishOnBoard(problem, placed, frame.board, frame.dx, frame.dy, set);
-        if (!first.ok) continue;
-        let cur: Placed = first;
-        for (let round = 0; round <= REPAIRS; round++) {
-          const routedDesign = designAfterSwaps(design, cur.state, problem.sections, cur.slotSections);
-          const placement = placementLayout(cur.state, routedDesign, frame.board, new Set(locked.value.keys()));
-          progress('route', round / (REPAIRS + 1), cur.anneal.cost, cur.anneal.cost);
-          const routed = routeLayout(routedDesign, placement, { cutStyle: opts.cutStyle, linksOverBodies: opts.linksOverBodies });
-          if (!routed.ok) {
-            const nets = routed.problems.flatMap((p) => p.nets ?? []);
-            reasons.push(`${boardName(frame.board)}: ${routed.problems[0]?.message ?? 'did not route'}`);
-            if (round === REPAIRS || stopped) break;
-            const ids = [...new Set(nets)].map((n) => problem.nets.findIndex((x) => x.name === n)).filter((i) => i >= 0);
-            cur = reweighAndPolish(problem, cur, ids, REWEIGH, set);
-            continue;
-          }
-          progress('verify', 0, cur.anneal.cost, cur.anneal.cost);
-          const report = verifyLayout(circuit, routed.value.layout);
-          if (!report.clean) {
-            reasons.push(`${boardName(frame.board)}: the routed layout failed verification (${report.faults.map((f) => f.code).join(', ')})`);
-            break;
-          }
-          const layout: Layout = { ...routed.value.layout, meta: { program: PROGRAM, seed: opts.seed, effort: opts.effort, attempt: attempt + 1 } };
-          const cost = placementCost(cur.state, set.weights).total;
-          return ok({ layout, design: routedDesign, stats: layoutStats(layout, routed.value.stats, cost, problem.parts.length, attempt + 1, placed.anneal.steps + cur.anneal.steps) }, report.warnings);
-        }
-      }
-    }
+  const env: Env = {
+    design,
+    problem,
+    opts,
+    locked: locked.value,
+    circuit: context.circuit ?? circuitOfDesign(design),
+    auto: opts.board === 'auto' && !(locked.value.size && context.previous),
+    ...(context.previous ? { previous: context.previous.board } : {}),
+    reasons: [],
+    progress: (phase, fraction, cost, best) => hooks.onProgress?.({ phase, fraction, cost, best }),
+    stop: () => (stopped ||= hooks.shouldStop?.() ?? false),
+  };
+  // A longer effort first plans as quick does, then carries on from that placement and
+  // keeps the better layout: it is never worse than quick for the same seed. When quick
+  // finds nothing, the longer effort searches afresh with all its steps.
+  const quick = search(env, 'quick');
+  let found = quick;
+  if (opts.effort !== 'quick' && !stopped) {
+    const longer = quick ? search(env, opts.effort, quick.start) : search(env, opts.effort);
+    if (longer && (!found || longer.score < found.score - 1e-9)) found = longer;
   }
+  if (found) return ok(found.planned, found.warnings);
   return fail([
     noLayout(
       stopped ? 'planning was stopped before a layout routed' : 'no placement could be routed and verified',
-      reasons,
-      auto ? 'try --effort thorough, another --seed, or a pad board' : 'try a bigger board, auto, another seed or fewer keep-out areas',
+      env.reasons,
+      env.auto ? 'try --effort thorough, another --seed, or a pad board' : 'try a bigger board, auto, another seed or fewer keep-out areas',
     ),
   ]);
 }

@@ -42,6 +42,8 @@ export function plantedInstance(count: number, seed: number): PlantedInstance {
     const span = k.footprint === 'axial-small' || k.footprint === 'do35' ? { min: 3, max: 5 } : undefined;
     const dp: DesignPart = { ref: `P${i + 1}`, kind: k.kind, footprint: k.footprint, pinNames: k.pins.slice(), nets: {}, polarized: false, source: [i] };
     if (span) dp.span = span;
+    // An ic names its package (the circuit rebuilt for verifying needs it).
+    if (k.kind === 'ic') dp.package = 'DIP-8';
     parts.push(dp);
   }
   // Nets come later; build the problem with placeholder nets to get the poses.
