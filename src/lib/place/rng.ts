@@ -6,6 +6,8 @@
  * plan is reproducible from its seed. The generator is also handed to d3-force as its
  * random source.
  */
+import { mulberry32 } from '../random/index.ts';
+
 export interface Rng {
   next(): number;
   int(n: number): number;
@@ -14,14 +16,7 @@ export interface Rng {
 }
 
 export function createRng(seed: number): Rng {
-  let s = (seed ^ 0x9e3779b9) >>> 0;
-  const next = (): number => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const next = mulberry32((seed ^ 0x9e3779b9) >>> 0);
   return {
     next,
     int: (n) => Math.floor(next() * n),
