@@ -9,24 +9,20 @@
  */
 import type { Problem } from '../../lib/model/index.ts';
 import type { SpiceOverride } from '../../lib/netlist/index.ts';
+import { readArgs } from '../args.ts';
 import { loadCircuit, loadOverrides, printProblems, problemLine, type LoadedCircuit } from '../io.ts';
 
 const USAGE = 'usage: kerfline check <circuit.json|netlist.cir> [--json] [--overrides answers.json]\n';
 
 function parseArgs(args: string[]): { file?: string; json: boolean; overrides?: string; error?: string } {
-  const out: { file?: string; json: boolean; overrides?: string; error?: string } = { json: false };
-  for (let i = 0; i < args.length; i++) {
-    const a = args[i]!;
-    if (a === '--json') out.json = true;
-    else if (a === '--overrides') {
-      const v = args[++i];
-      if (!v) out.error = '--overrides needs a file name';
-      else out.overrides = v;
-    } else if (a.startsWith('-')) out.error = `unknown option ${a}`;
-    else if (out.file) out.error = `one circuit at a time (got ${out.file} and ${a})`;
-    else out.file = a;
-  }
-  if (!out.file && !out.error) out.error = 'name the circuit file to check';
+  const r = readArgs(args, { flags: ['--json'], options: ['--overrides'] });
+  const out: { file?: string; json: boolean; overrides?: string; error?: string } = { json: r.flags.has('--json') };
+  const overrides = r.options.get('--overrides');
+  if (overrides !== undefined) out.overrides = overrides;
+  if (r.files[0] !== undefined) out.file = r.files[0];
+  if (r.error) out.error = r.error;
+  else if (r.files.length > 1) out.error = `one circuit at a time (got ${r.files[0]} and ${r.files[1]})`;
+  else if (!out.file) out.error = 'name the circuit file to check';
   return out;
 }
 

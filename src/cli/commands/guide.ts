@@ -11,6 +11,7 @@
  */
 import { existsSync } from 'node:fs';
 import { buildGuide, guideHtml, guidePages, type Paper } from '../../lib/guide/index.ts';
+import { readArgs } from '../args.ts';
 import { loadCircuit, loadLayout, printProblems, writeTextFile } from '../io.ts';
 
 const USAGE = 'usage: kerfline guide <circuit> <layout> --out guide.html [--pdf guide.pdf] [--paper a4|letter]\n';
@@ -25,26 +26,18 @@ interface Args {
 }
 
 function parseArgs(args: string[]): Args {
+  const r = readArgs(args, { options: ['--out', '--pdf', '--paper'] });
   const out: Args = { paper: 'a4' };
-  const files: string[] = [];
-  for (let i = 0; i < args.length; i++) {
-    const a = args[i]!;
-    const value = () => {
-      const v = args[++i];
-      if (!v || v.startsWith('--')) out.error = `${a} needs a value`;
-      return v ?? '';
-    };
-    if (a === '--out') out.out = value();
-    else if (a === '--pdf') out.pdf = value();
-    else if (a === '--paper') {
-      const v = value().toLowerCase();
-      if (v === 'a4' || v === 'letter') out.paper = v;
-      else out.error ??= `--paper is a4 or letter, not "${v}"`;
-    } else if (a.startsWith('-')) out.error ??= `unknown option ${a}`;
-    else files.push(a);
-  }
-  if (files.length !== 2) out.error ??= 'name the circuit file and then the layout file';
-  else [out.circuit, out.layout] = files;
+  const html = r.options.get('--out');
+  if (html !== undefined) out.out = html;
+  const pdf = r.options.get('--pdf');
+  if (pdf !== undefined) out.pdf = pdf;
+  const paper = r.options.get('--paper')?.toLowerCase();
+  if (paper === 'a4' || paper === 'letter') out.paper = paper;
+  else if (paper !== undefined) out.error = `--paper is a4 or letter, not "${paper}"`;
+  if (r.error) out.error ??= r.error;
+  if (r.files.length !== 2) out.error ??= 'name the circuit file and then the layout file';
+  else [out.circuit, out.layout] = r.files;
   if (!out.out && !out.error) out.error = 'say where to write the guide: --out guide.html';
   return out;
 }

@@ -15,6 +15,7 @@
 import { CutStyleSchema, type CutStyle, type Problem } from '../../lib/model/index.ts';
 import { routeLayout } from '../../lib/route/index.ts';
 import { verifyLayout } from '../../lib/verify/index.ts';
+import { readArgs } from '../args.ts';
 import { loadCircuit, loadLayout, printProblems, writeTextFile } from '../io.ts';
 
 const USAGE = 'usage: kerfline route <circuit.json|netlist.cir> <layout.json> --out FILE [--cut hole|between|either] [--links-over-bodies]\n';
@@ -33,23 +34,20 @@ interface Args {
 }
 
 function parseArgs(args: string[]): Args {
-  const a: Args = { linksOverBodies: false };
-  for (let i = 0; i < args.length; i++) {
-    const arg = args[i]!;
-    if (arg === '--out' || arg === '-o') {
-      const v = args[++i];
-      if (!v) a.error = `${arg} needs a file name`;
-      else a.out = v;
-    } else if (arg === '--cut') {
-      const v = CutStyleSchema.safeParse(args[++i]);
-      if (!v.success) a.error = '--cut takes hole, between or either';
-      else a.cut = v.data;
-    } else if (arg === '--links-over-bodies') a.linksOverBodies = true;
-    else if (arg.startsWith('-')) a.error = `unknown option ${arg}`;
-    else if (!a.circuit) a.circuit = arg;
-    else if (!a.layout) a.layout = arg;
-    else a.error = `too many files (${arg}): give one circuit and one layout`;
+  const r = readArgs(args.map((x) => (x === '-o' ? '--out' : x)), { flags: ['--links-over-bodies'], options: ['--out', '--cut'] });
+  const a: Args = { linksOverBodies: r.flags.has('--links-over-bodies') };
+  const out = r.options.get('--out');
+  if (out !== undefined) a.out = out;
+  const cut = r.options.get('--cut');
+  if (cut !== undefined) {
+    const v = CutStyleSchema.safeParse(cut);
+    if (v.success) a.cut = v.data;
+    else a.error = '--cut takes hole, between or either';
   }
+  if (r.files[0] !== undefined) a.circuit = r.files[0];
+  if (r.files[1] !== undefined) a.layout = r.files[1];
+  if (r.error) a.error = r.error;
+  else if (r.files.length > 2) a.error = `too many files (${r.files[2]}): give one circuit and one layout`;
   if (!a.error && (!a.circuit || !a.layout)) a.error = 'name the circuit file and the placed layout file';
   if (!a.error && !a.out) a.error = 'say where to write the routed layout with --out FILE';
   return a;

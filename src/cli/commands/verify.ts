@@ -23,6 +23,7 @@ import { holeLabelBoth } from '../../lib/board/index.ts';
 import { formatPath, type Problem } from '../../lib/model/index.ts';
 import type { SpiceOverride } from '../../lib/netlist/index.ts';
 import { verifyLayout } from '../../lib/verify/index.ts';
+import { readArgs } from '../args.ts';
 import { loadCircuit, loadLayout, loadOverrides } from '../io.ts';
 
 const USAGE = 'usage: kerfline verify <circuit.json|netlist.cir> <layout.json> [--json] [--overrides answers.json]\n';
@@ -43,20 +44,15 @@ interface Args {
 }
 
 function parseArgs(args: string[]): Args {
-  const out: Args = { json: false };
-  for (let i = 0; i < args.length; i++) {
-    const a = args[i]!;
-    if (a === '--json') out.json = true;
-    else if (a === '--overrides') {
-      const v = args[++i];
-      if (!v) out.error = '--overrides needs a file name';
-      else out.overrides = v;
-    } else if (a.startsWith('-')) out.error = `unknown option ${a}`;
-    else if (!out.circuit) out.circuit = a;
-    else if (!out.layout) out.layout = a;
-    else out.error = `too many files (${a}): give one circuit and one layout`;
-  }
-  if (!out.error && (!out.circuit || !out.layout)) out.error = 'name the circuit file and the layout file';
+  const r = readArgs(args, { flags: ['--json'], options: ['--overrides'] });
+  const out: Args = { json: r.flags.has('--json') };
+  const overrides = r.options.get('--overrides');
+  if (overrides !== undefined) out.overrides = overrides;
+  if (r.files[0] !== undefined) out.circuit = r.files[0];
+  if (r.files[1] !== undefined) out.layout = r.files[1];
+  if (r.error) out.error = r.error;
+  else if (r.files.length > 2) out.error = `too many files (${r.files[2]}): give one circuit and one layout`;
+  else if (!out.circuit || !out.layout) out.error = 'name the circuit file and the layout file';
   return out;
 }
 

@@ -33,14 +33,7 @@ export function listText(items: readonly string[], max = 8): string {
   return `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
 }
 
-export interface ProblemExtra {
-  hint?: string;
-  refs?: string[];
-  nets?: string[];
-  holes?: Hole[];
-  pins?: { ref: string; pin: string }[];
-  data?: Record<string, unknown>;
-}
+export type ProblemExtra = Partial<Pick<Problem, 'hint' | 'refs' | 'nets' | 'holes' | 'pins' | 'data'>>;
 
 /** Build a problem with only the fields that are set (so equal checks give equal data). */
 export function problem(code: string, severity: Severity, path: (string | number)[], message: string, extra: ProblemExtra = {}): Problem {
