@@ -4,7 +4,7 @@
  *
  * Each step proposes a move (moves.ts), applies it, recounts only the touched conductors
  * and nets (state.settle) and accepts it by the Metropolis rule at the current temperature;
- * a rejected move is undone. The temperature starts from the mean uphill step of a short
+ * a rejected move is undone (state.settleBack puts the counts back without recounting). The temperature starts from the mean uphill step of a short
  * sample and cools geometrically to 1/500 of it over `steps`; the shift radius shrinks
  * with it. The best placement seen is kept and restored at the end. Deterministic for a
  * given generator; `shouldStop` is asked every 256 steps; `onProgress` gets 50 reports.
@@ -106,7 +106,7 @@ export function anneal(s: PlaceState, o: AnnealOptions): AnnealResult {
         delta: now - cost,
         undo: () => {
           applyGate(s, o, g);
-          s.settle();
+          s.settleBack();
         },
       };
     }
@@ -118,7 +118,7 @@ export function anneal(s: PlaceState, o: AnnealOptions): AnnealResult {
       delta: now - cost,
       undo: () => {
         s.moveMany(m.parts, old);
-        s.settle();
+        s.settleBack();
       },
     };
   };

@@ -7,35 +7,62 @@
  */
 import type { PlaceState } from './state.ts';
 
+/** Scratch for one net's segments, packed (row·1024 + lo)·1024 + hi so a numeric sort orders them by row, then lo (rows and columns < 1024). */
+let scratch = new Int32Array(64);
+/** Conductors already seen for the net being judged. */
+let seen = new Int32Array(64);
+
 export function blockedPairs(s: PlaceState, net: number): number {
   const t = s.tally;
   if (t.segs[net]! < 2) return 0;
-  const rows = new Set<number>();
-  for (const h of s.netHoles[net]!) rows.add(s.map.cond[h]!);
-  const segs: { row: number; lo: number; hi: number }[] = [];
-  for (const c of rows) {
+  let nRows = 0;
+  let n = 0;
+  for (const h of s.netHoles[net]!) {
+    const c = s.map.cond[h]!;
+    let dup = false;
+    for (let i = 0; i < nRows && !dup; i++) dup = seen[i] === c;
+    if (dup) continue;
+    if (nRows === seen.length) {
+      const more = new Int32Array(nRows * 2);
+      more.set(seen);
+      seen = more;
+    }
+    seen[nRows++] = c;
     const runs = t.runs[c]!;
-    for (let i = 0; i < runs.length; i++) if (runs[i] === net) segs.push({ row: Math.floor(s.map.holes[c]![0]! / s.W), lo: t.runLo[c]![i]!, hi: t.runHi[c]![i]! });
+    const row = Math.floor(s.map.holes[c]![0]! / s.W);
+    for (let i = 0; i < runs.length; i++) {
+      if (runs[i] !== net) continue;
+      if (n === scratch.length) {
+        const more = new Int32Array(n * 2);
+        more.set(scratch);
+        scratch = more;
+      }
+      scratch[n++] = (row * 1024 + t.runLo[c]![i]!) * 1024 + t.runHi[c]![i]!;
+    }
   }
-  segs.sort((a, b) => a.row - b.row || a.lo - b.lo);
+  const segs = scratch.subarray(0, n).sort();
   // Remember how far the net's segments reach along the rows: bodies outside cannot matter.
   let lo = Infinity;
   let hi = -Infinity;
-  for (const g of segs) {
-    lo = Math.min(lo, g.lo);
-    hi = Math.max(hi, g.hi);
+  for (let i = 0; i < n; i++) {
+    const g = segs[i]!;
+    lo = Math.min(lo, (g >> 10) & 1023);
+    hi = Math.max(hi, g & 1023);
   }
   s.netReachLo[net] = lo;
   s.netReachHi[net] = hi;
   let blocked = 0;
-  for (let i = 0; i + 1 < segs.length; i++) {
+  for (let i = 0; i + 1 < n; i++) {
     const a = segs[i]!;
     const b = segs[i + 1]!;
-    if (a.row === b.row) continue; // joined along the row, or through another row: not judged here
+    const aRow = a >> 20;
+    const bRow = b >> 20;
+    if (aRow === bRow) continue; // joined along the row, or through another row: not judged here
     let found = false;
-    for (let x = Math.max(a.lo, b.lo); x <= Math.min(a.hi, b.hi) && !found; x++) {
+    const x1 = Math.min(a & 1023, b & 1023);
+    for (let x = Math.max((a >> 10) & 1023, (b >> 10) & 1023); x <= x1 && !found; x++) {
       let clear = true;
-      for (let y = a.row; y <= b.row && clear; y++) {
+      for (let y = aRow; y <= bRow && clear; y++) {
         const k = x + y * s.W;
         if (s.owner[k] !== -1 || s.blocked[k]) clear = false;
       }

@@ -5,7 +5,8 @@
  * number of cuts on a conductor is the number of net changes between neighbouring leads
  * (placement-notes.md); each run of one net between changes is a segment, and a net on k
  * segments needs k − 1 links. `add`/`remove` mark a conductor dirty; `flush()` recounts only
- * the dirty conductors and reports which nets changed, so a move costs the rows it touches.
+ * the dirty conductors and reports which nets changed, so a move costs the rows it touches;
+ * `flushBack()` after an exact undo puts back what the last flush replaced, without a recount.
  */
 import type { CopperMap } from './copper-map.ts';
 
@@ -45,6 +46,11 @@ export class CopperTally {
   private readonly crampedOf: Int32Array;
   private readonly dirty: number[] = [];
   private readonly isDirty: Uint8Array;
+  /** What the last flush replaced, per conductor it recounted (for flushBack). */
+  private readonly logAt: Int32Array;
+  private readonly logCond: number[] = [];
+  private readonly logRuns: number[][][] = [];
+  private readonly logCramped: number[] = [];
 
   constructor(
     private readonly map: CopperMap,
@@ -63,6 +69,7 @@ export class CopperTally {
     this.starved = new Int32Array(nets);
     this.weight = new Float64Array(nets).fill(1);
     this.isDirty = new Uint8Array(map.conductors);
+    this.logAt = new Int32Array(map.conductors).fill(-1);
   }
 
   add(hole: number, net: number): void {
@@ -128,17 +135,22 @@ export class CopperTally {
     return false;
   }
 
+  private clearLog(): void {
+    for (const c of this.logCond) this.logAt[c] = -1;
+    this.logCond.length = 0;
+    this.logRuns.length = 0;
+    this.logCramped.length = 0;
+  }
+
   /** Recount dirty conductors; calls `touched(net)` for every net whose segments changed. */
   flush(touched: (net: number) => void): void {
+    this.clearLog();
     for (const c of this.dirty) {
       this.isDirty[c] = 0;
-      const old = this.runs[c]!;
-      const oldStarved = this.starvedRuns[c]!;
-      const oldLo = this.runLo[c]!;
-      const oldHi = this.runHi[c]!;
-      for (let i = 0; i < old.length; i++) this.bump(old[i]!, -1, -oldStarved[i]!);
-      this.cuts -= old.length > 1 ? old.length - 1 : 0;
-      this.cramped -= this.crampedOf[c]!;
+      this.logAt[c] = this.logCond.length;
+      this.logCond.push(c);
+      this.logRuns.push([this.runs[c]!, this.runLo[c]!, this.runHi[c]!, this.starvedRuns[c]!]);
+      this.logCramped.push(this.crampedOf[c]!);
       // Runs in copper order; each may use its own holes and the gaps on either side.
       const fresh: number[] = [];
       const lo: number[] = [];
@@ -163,33 +175,70 @@ export class CopperTally {
       if (fresh.length) hi.push(this.map.holes[c]!.length - 1);
       const starved: number[] = [];
       for (let i = 0; i < fresh.length; i++) starved.push(this.isFree(c, lo[i]!, hi[i]!) ? 0 : 1);
-      this.runLo[c] = lo;
-      this.runHi[c] = hi;
-      for (let i = 0; i < fresh.length; i++) this.bump(fresh[i]!, 1, starved[i]!);
-      // Tell only about runs that came, went or changed their reach: the others' nets keep
-      // their segments and link lanes. Both lists run in copper order: merge them.
-      let i = 0;
-      let j = 0;
-      while (i < old.length || j < fresh.length) {
-        const a = i < old.length ? oldLo[i]! : Infinity;
-        const b = j < fresh.length ? lo[j]! : Infinity;
-        if (a < b) touched(old[i++]!);
-        else if (b < a) touched(fresh[j++]!);
-        else {
-          if (old[i] !== fresh[j] || oldHi[i] !== hi[j] || oldStarved[i] !== starved[j]) {
-            touched(old[i]!);
-            touched(fresh[j]!);
-          }
-          i++;
-          j++;
-        }
-      }
-      this.cuts += fresh.length > 1 ? fresh.length - 1 : 0;
-      this.crampedOf[c] = cramped;
-      this.cramped += cramped;
-      this.runs[c] = fresh;
-      this.starvedRuns[c] = starved;
+      this.setRuns(c, fresh, lo, hi, starved, cramped, touched);
     }
     this.dirty.length = 0;
+  }
+
+  /**
+   * Flush after the leads and bodies of the last flush were put back exactly as they were:
+   * the conductors it recounted get their old runs back instead of a recount (any other
+   * dirty conductor is recounted as usual).
+   */
+  flushBack(touched: (net: number) => void): void {
+    const again: number[] = [];
+    for (const c of this.dirty) {
+      const k = this.logAt[c]!;
+      if (k < 0) {
+        again.push(c);
+        continue;
+      }
+      this.isDirty[c] = 0;
+      const [runs, lo, hi, starved] = this.logRuns[k]!;
+      this.setRuns(c, runs!, lo!, hi!, starved!, this.logCramped[k]!, touched);
+    }
+    this.dirty.length = 0;
+    this.clearLog();
+    if (again.length) {
+      this.dirty.push(...again);
+      this.flush(touched);
+    }
+  }
+
+  /** Replace a conductor's runs, keeping segments, cuts, links and cramped counts in step. */
+  private setRuns(c: number, fresh: number[], lo: number[], hi: number[], starved: number[], cramped: number, touched: (net: number) => void): void {
+    const old = this.runs[c]!;
+    const oldStarved = this.starvedRuns[c]!;
+    const oldLo = this.runLo[c]!;
+    const oldHi = this.runHi[c]!;
+    for (let i = 0; i < old.length; i++) this.bump(old[i]!, -1, -oldStarved[i]!);
+    this.cuts -= old.length > 1 ? old.length - 1 : 0;
+    this.cramped -= this.crampedOf[c]!;
+    this.runLo[c] = lo;
+    this.runHi[c] = hi;
+    for (let i = 0; i < fresh.length; i++) this.bump(fresh[i]!, 1, starved[i]!);
+    // Tell only about runs that came, went or changed their reach: the others' nets keep
+    // their segments and link lanes. Both lists run in copper order: merge them.
+    let i = 0;
+    let j = 0;
+    while (i < old.length || j < fresh.length) {
+      const a = i < old.length ? oldLo[i]! : Infinity;
+      const b = j < fresh.length ? lo[j]! : Infinity;
+      if (a < b) touched(old[i++]!);
+      else if (b < a) touched(fresh[j++]!);
+      else {
+        if (old[i] !== fresh[j] || oldHi[i] !== hi[j] || oldStarved[i] !== starved[j]) {
+          touched(old[i]!);
+          touched(fresh[j]!);
+        }
+        i++;
+        j++;
+      }
+    }
+    this.cuts += fresh.length > 1 ? fresh.length - 1 : 0;
+    this.crampedOf[c] = cramped;
+    this.cramped += cramped;
+    this.runs[c] = fresh;
+    this.starvedRuns[c] = starved;
   }
 }

@@ -22,7 +22,9 @@
  * bigger board (auto) or with the next seed, with a looser area weight; when all fail the
  * result is `place.no-layout` with every reason. Normal and thorough effort first plan as
  * quick does, then carry on annealing from the quick placement for the rest of their steps
- * and keep the better layout (planScore), so they are never worse than quick for a seed.
+ * and keep the better layout (planScore), so they are never worse than quick for a seed;
+ * designs of more than CARRY_PARTS parts skip the quick pre-pass and search at their effort
+ * from the start (routing the quick placement cost more than it earned there).
  */
 import type { Design } from '../netlist/design.ts';
 import type { Circuit } from '../model/circuit.ts';
@@ -92,6 +94,8 @@ const STARTS_PARTS = 40;
 const POLISH_PARTS = 50;
 /** Starting warmth when a longer effort carries on from the quick placement: a full re-anneal (cooler starts gained nothing on the demos). */
 const CARRY_WARMTH = 1;
+/** Bigger designs at normal or thorough effort skip the quick pre-pass (its routing rounds cost more than its guarantee earns there). */
+const CARRY_PARTS = 50;
 export const PROGRAM = 'kerfline plan 0.1';
 
 function fixedBoard(choice: Exclude<PlanOptions['board'], 'auto'>): Board {
@@ -280,7 +284,7 @@ export function planLayout(design: Design, options: PlanOptionsInput, hooks: Pla
   // A longer effort first plans as quick does, then carries on from that placement and
   // keeps the better layout: it is never worse than quick for the same seed. When quick
   // finds nothing, the longer effort searches afresh with all its steps.
-  const quick = search(env, 'quick');
+  const quick = opts.effort !== 'quick' && problem.parts.length > CARRY_PARTS ? undefined : search(env, 'quick');
   let found = quick;
   if (opts.effort !== 'quick' && !stopped) {
     const longer = quick ? search(env, opts.effort, quick.start) : search(env, opts.effort);

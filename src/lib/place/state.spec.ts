@@ -67,4 +67,32 @@ describe('PlaceState', () => {
       { numRuns: 60 },
     );
   });
+
+  it('puts the cost back exactly when a move is undone with settleBack', () => {
+    const start: Spot[] = [
+      { x: 0, y: 0, pose: 0 },
+      { x: 0, y: 2, pose: 0 },
+      { x: 0, y: 4, pose: 0 },
+      { x: 0, y: 6, pose: 0 },
+      { x: 8, y: 4, pose: 0 },
+    ];
+    fc.assert(
+      fc.property(fc.array(fc.tuple(fc.nat(4), fc.nat(13), fc.nat(11), fc.nat(40), fc.boolean()), { maxLength: 40 }), (moves) => {
+        const s = fresh(start);
+        for (const [p, x, y, k, undo] of moves) {
+          const old = s.spotOf(p);
+          if (!s.moveMany([p], [{ x, y, pose: k % problem.parts[p]!.poses.length }])) continue;
+          s.settle();
+          if (!undo) continue;
+          s.moveMany([p], [old]);
+          s.settleBack();
+        }
+        const again = fresh(problem.parts.map((_, p) => s.spotOf(p)));
+        expect(placementCost(s)).toEqual(placementCost(again));
+        expect(s.blockedSum).toBe(again.blockedSum);
+        expect(s.tally.runs).toEqual(again.tally.runs);
+      }),
+      { numRuns: 60 },
+    );
+  });
 });

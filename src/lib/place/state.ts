@@ -5,7 +5,8 @@
  * the board or in a keep-out area), the copper tally (cuts, links), per-net lead lists with
  * their bounding boxes (link-length and wire-length estimates) and per-row/column body counts
  * (the board area, since the board is cut to size). `place`/`lift` move parts, `setNet`
- * changes the net of one pin (gate swaps); `cost()` combines the cached terms with the
+ * changes the net of one pin (gate swaps); `settle()` brings the counts up to date and
+ * `settleBack()` does so after the last settle's moves were undone exactly; `cost()` combines the cached terms with the
  * weights in cost.ts. Nothing here draws random numbers.
  */
 import type { CopperMap } from './copper-map.ts';
@@ -48,6 +49,8 @@ export class PlaceState {
   readonly rowCount: Int32Array;
   readonly colCount: Int32Array;
   private readonly dirtyNets: number[] = [];
+  /** Link-lane verdicts the last settle changed: net, old count, old reach lo, old reach hi (for settleBack). */
+  private readonly laneLog: number[] = [];
   private readonly netDirty: Uint8Array;
 
   constructor(
@@ -200,7 +203,31 @@ export class PlaceState {
 
   /** Bring cuts, links and per-net estimates up to date after moves. */
   settle(): void {
-    this.tally.flush((net) => this.markNet(net));
+    this.laneLog.length = 0;
+    this.recount(false);
+  }
+
+  /**
+   * Settle after undoing the moves of the last settle exactly (same parts back at the same
+   * spots, same nets): the link-lane verdicts are put back as they were instead of judged
+   * again, since the bodies and leads they looked at are back too.
+   */
+  settleBack(): void {
+    this.recount(true);
+    const log = this.laneLog;
+    for (let i = log.length - 4; i >= 0; i -= 4) {
+      const n = log[i]!;
+      this.blockedSum += (log[i + 1]! - this.netBlocked[n]!) * this.tally.weight[n]!;
+      this.netBlocked[n] = log[i + 1]!;
+      this.netReachLo[n] = log[i + 2]!;
+      this.netReachHi[n] = log[i + 3]!;
+    }
+    log.length = 0;
+  }
+
+  private recount(back: boolean): void {
+    if (back) this.tally.flushBack((net) => this.markNet(net));
+    else this.tally.flush((net) => this.markNet(net));
     const pad = this.map.padLike;
     const rows = this.map.alongRows;
     for (const net of this.dirtyNets) {
@@ -226,7 +253,7 @@ export class PlaceState {
       this.lenSum += len - this.netLen[net]!;
       this.netLen[net] = len;
     }
-    if (rows && this.judgeLanes) {
+    if (rows && this.judgeLanes && !back) {
       // Re-judge link channels of nets whose leads moved and of nets spanning moved bodies.
       const lo = this.bodyRowLo;
       const hi = this.bodyRowHi;
@@ -234,10 +261,18 @@ export class PlaceState {
       const xhi = this.bodyColHi;
       for (let n = 0; n < this.netBlocked.length; n++) {
         if (!this.netDirty[n] && (this.tally.segs[n]! < 2 || this.netMaxY[n]! < lo || this.netMinY[n]! > hi || this.netReachHi[n]! < xlo || this.netReachLo[n]! > xhi)) {
-          if (this.tally.segs[n]! < 2 && this.netBlocked[n]) this.setBlocked(n, 0);
+          if (this.tally.segs[n]! < 2 && this.netBlocked[n]) {
+            this.laneLog.push(n, this.netBlocked[n]!, this.netReachLo[n]!, this.netReachHi[n]!);
+            this.setBlocked(n, 0);
+          }
           continue;
         }
-        this.setBlocked(n, blockedPairs(this, n));
+        const before = this.netBlocked[n]!;
+        const lo0 = this.netReachLo[n]!;
+        const hi0 = this.netReachHi[n]!;
+        const v = blockedPairs(this, n);
+        if (v !== before || this.netReachLo[n] !== lo0 || this.netReachHi[n] !== hi0) this.laneLog.push(n, before, lo0, hi0);
+        this.setBlocked(n, v);
       }
     }
     for (const net of this.dirtyNets) this.netDirty[net] = 0;
