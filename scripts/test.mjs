@@ -1,5 +1,5 @@
 #!/usr/bin/env node
-// The README's test command: type-check, unit and property tests, build, browser tests.
+// The README's test command: type-check (tsc, svelte-check), unit and property tests, build, browser tests.
 // Browser tests need Debian's Chromium; when it is missing we install it as root, else we
 // stop with the one command that installs it.
 import { spawnSync } from 'node:child_process';
@@ -27,6 +27,7 @@ if (!existsSync(chromium)) {
 mkdirSync('test-results', { recursive: true });
 const steps = [
   ['type check', 'npx', ['tsc', '--noEmit', '-p', '.']],
+  ['Svelte check', 'npx', ['svelte-check', '--tsconfig', './tsconfig.json', '--threshold', 'warning', '--fail-on-warnings']],
   ['unit and property tests', 'npx', ['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile.json=test-results/unit.json']],
   ['build the app', 'npx', ['vite', 'build', '--logLevel', 'warn']],
   ['browser tests', 'npx', ['vitest', 'run', '-c', 'vitest.e2e.config.ts', '--reporter=default', '--reporter=json', '--outputFile.json=test-results/e2e.json']],
