@@ -26,6 +26,15 @@ function fresh(spots: Spot[]): PlaceState {
   return s;
 }
 
+/** Five parts in a column and one to the side: the start of the random move sequences. */
+const START: Spot[] = [
+  { x: 0, y: 0, pose: 0 },
+  { x: 0, y: 2, pose: 0 },
+  { x: 0, y: 4, pose: 0 },
+  { x: 0, y: 6, pose: 0 },
+  { x: 8, y: 4, pose: 0 },
+];
+
 describe('PlaceState', () => {
   it('gives every unconnected IC pin a net of its own', () => {
     const u1 = problem.parts.find((p) => p.ref === 'U1')!;
@@ -44,16 +53,9 @@ describe('PlaceState', () => {
   });
 
   it('keeps its incremental cost equal to a placement built from scratch', () => {
-    const start: Spot[] = [
-      { x: 0, y: 0, pose: 0 },
-      { x: 0, y: 2, pose: 0 },
-      { x: 0, y: 4, pose: 0 },
-      { x: 0, y: 6, pose: 0 },
-      { x: 8, y: 4, pose: 0 },
-    ];
     fc.assert(
       fc.property(fc.array(fc.tuple(fc.nat(4), fc.nat(13), fc.nat(11), fc.nat(40)), { maxLength: 40 }), (moves) => {
-        const s = fresh(start);
+        const s = fresh(START);
         for (const [p, x, y, k] of moves) {
           const spot = { x, y, pose: k % problem.parts[p]!.poses.length };
           s.moveMany([p], [spot]);
@@ -69,16 +71,9 @@ describe('PlaceState', () => {
   });
 
   it('puts the cost back exactly when a move is undone with settleBack', () => {
-    const start: Spot[] = [
-      { x: 0, y: 0, pose: 0 },
-      { x: 0, y: 2, pose: 0 },
-      { x: 0, y: 4, pose: 0 },
-      { x: 0, y: 6, pose: 0 },
-      { x: 8, y: 4, pose: 0 },
-    ];
     fc.assert(
       fc.property(fc.array(fc.tuple(fc.nat(4), fc.nat(13), fc.nat(11), fc.nat(40), fc.boolean()), { maxLength: 40 }), (moves) => {
-        const s = fresh(start);
+        const s = fresh(START);
         for (const [p, x, y, k, undo] of moves) {
           const old = s.spotOf(p);
           if (!s.moveMany([p], [{ x, y, pose: k % problem.parts[p]!.poses.length }])) continue;

@@ -9,17 +9,14 @@
  * seen from the side drawn.
  */
 import type { Hole } from '../model/problem.ts';
+import type { Shape } from '../parts/footprint.ts';
 
 export type SceneSide = 'component' | 'copper';
 
 export type Point = [number, number];
 
-/** A body outline already posed and in mm. `dee` is a TO-92 body: round with one flat. */
-export type SceneShape =
-  | { shape: 'rect'; x: number; y: number; w: number; h: number }
-  | { shape: 'circle'; cx: number; cy: number; r: number }
-  | { shape: 'line'; x1: number; y1: number; x2: number; y2: number }
-  | { shape: 'dee'; cx: number; cy: number; r: number; flat: 'down' | 'up' | 'left' | 'right' };
+/** A body outline already posed and in mm: the footprint contract's shapes, in mm not holes. */
+export type SceneShape = Shape;
 
 export interface SceneText {
   x: number;
