@@ -43,15 +43,26 @@ describe('planLayout', () => {
     if (a.ok && b.ok) expect(JSON.stringify(a.value.layout)).toBe(JSON.stringify(b.value.layout));
   });
 
-  it('is never worse at normal effort than at quick for the same seed', () => {
+  it('is never worse at normal effort than at quick for the same seed (small designs: holes used first, then score)', () => {
     for (const seed of [2, 7]) {
       const quick = planned(follower, { effort: 'quick', seed });
       const normal = planned(follower, { effort: 'normal', seed });
       expect(quick.ok && normal.ok).toBe(true);
       if (!quick.ok || !normal.ok) continue;
       expect(normal.value.layout.meta).toMatchObject({ seed, effort: 'normal' });
-      expect(planScore(normal.value.stats, 2.54)).toBeLessThanOrEqual(planScore(quick.value.stats, 2.54));
+      const [q, n] = [quick.value.stats, normal.value.stats];
+      expect(n.holesUsed).toBeLessThanOrEqual(q.holesUsed);
+      if (n.holesUsed === q.holesUsed) expect(planScore(n, 2.54)).toBeLessThanOrEqual(planScore(q, 2.54));
     }
+  });
+
+  it('is never worse at normal effort than at quick by score on designs too big to shrink', () => {
+    const inst = plantedInstance(16, 9);
+    const circuit = circuitOfDesign(inst.design);
+    const quick = planLayout(inst.design, { effort: 'quick', seed: 3 }, {}, { circuit });
+    const normal = planLayout(inst.design, { effort: 'normal', seed: 3 }, {}, { circuit });
+    expect(quick.ok && normal.ok).toBe(true);
+    if (quick.ok && normal.ok) expect(planScore(normal.value.stats, 2.54)).toBeLessThanOrEqual(planScore(quick.value.stats, 2.54));
   });
 
   it('plans a planted design (its circuit, ic packages included, rebuilds and verifies)', () => {

@@ -24,7 +24,10 @@
  * quick does, then carry on annealing from the quick placement for the rest of their steps
  * and keep the better layout (planScore), so they are never worse than quick for a seed;
  * designs of more than CARRY_PARTS parts skip the quick pre-pass and search at their effort
- * from the start (routing the quick placement cost more than it earned there).
+ * from the start (routing the quick placement cost more than it earned there). 'auto' means
+ * the smallest board that routes: designs of up to SHRINK_PARTS parts then try boards one
+ * row or column smaller than the layout's used box, placed afresh, while one still routes
+ * and verifies (shrink); bigger designs keep the cropped board of their first layout.
  */
 import type { Design } from '../netlist/design.ts';
 import type { Circuit } from '../model/circuit.ts';
@@ -47,7 +50,7 @@ import { spreadColumns } from './spread.ts';
 import type { Spot } from './state.ts';
 import { buildProblem } from './problem.ts';
 import { cropBoard, workingBoard } from './board-size.ts';
-import { layoutStats, type PlanStats } from './stats.ts';
+import { layoutStats, usedBox, type PlanStats } from './stats.ts';
 
 export interface PlanProgress {
   phase: string;
@@ -96,6 +99,13 @@ const POLISH_PARTS = 50;
 const CARRY_WARMTH = 1;
 /** Bigger designs at normal or thorough effort skip the quick pre-pass (its routing rounds cost more than its guarantee earns there). */
 const CARRY_PARTS = 50;
+/** Designs up to this many parts on an auto strip or pad board look for a smaller board once one routes. */
+const SHRINK_PARTS = 12;
+/** Smaller boards tried at most while shrinking, and placements tried on each. */
+const SHRINK_TRIES = 12;
+const SHRINK_SEEDS = 2;
+/** Routing rounds per placement while shrinking (a board that needs many repairs is not worth it). */
+const SHRINK_ROUNDS = 2;
 export const PROGRAM = 'kerfline plan 0.1';
 
 function fixedBoard(choice: Exclude<PlanOptions['board'], 'auto'>): Board {
@@ -172,13 +182,13 @@ function settingsFor(env: Env, board: Board, attempt: number, effort: Effort): B
  * (ROUNDS in all). Spreading (free columns, spread.ts) needs a board that may grow: auto,
  * nothing locked, no keep-out areas.
  */
-function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, attempt: number, steps: number): { planned: Planned; warnings: Problem[] } | undefined {
+function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, attempt: number, steps: number, rounds = ROUNDS): { planned: Planned; warnings: Problem[] } | undefined {
   const { design, problem, opts } = env;
-  const canSpread = env.auto && !env.locked.size && !opts.keepOut.length;
+  const canSpread = rounds === ROUNDS && env.auto && !env.locked.size && !opts.keepOut.length;
   let cur = first;
   let frame = board;
   let repaired = false;
-  for (let round = 0; round < ROUNDS; round++) {
+  for (let round = 0; round < rounds; round++) {
     const routedDesign = designAfterSwaps(design, cur.state, problem.sections, cur.slotSections);
     const placement = placementLayout(cur.state, routedDesign, frame, new Set(env.locked.keys()));
     env.progress('route', round / ROUNDS, cur.anneal.cost, cur.anneal.cost);
@@ -196,7 +206,7 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
       return { planned: { layout, design: routedDesign, stats }, warnings: report.warnings };
     }
     env.reasons.push(`${boardName(frame)}: ${routed.problems[0]?.message ?? 'did not route'}`);
-    if (round === ROUNDS - 1 || env.stop()) return undefined;
+    if (round === rounds - 1 || env.stop()) return undefined;
     const nets = routed.problems.flatMap((p) => p.nets ?? []);
     const ids = [...new Set(nets)].map((n) => problem.nets.findIndex((x) => x.name === n)).filter((i) => i >= 0);
     // A free column where it lets a straight link join the failed nets; else (or on a
@@ -260,6 +270,49 @@ function search(env: Env, effort: Effort, from?: Found['start']): Found | undefi
   return undefined;
 }
 
+/**
+ * Small designs on an auto strip or pad board: from the found layout's used box, try the
+ * boards one column or one row smaller (smaller area first), placed afresh with a few seeds;
+ * a smaller board that routes and verifies wins and the search carries on from it, until
+ * neither shrink routes or SHRINK_TRIES boards are spent. These placements leave the greedy
+ * link plan out of the cost (it slows each step threefold; the routing decides anyway), and
+ * each gets SHRINK_ROUNDS routings, without spreading: the board may not grow.
+ */
+function shrink(env: Env, effort: Effort, found: Found): Found {
+  const { problem } = env;
+  const { kind, pitchMm } = found.planned.layout.board;
+  let best = found;
+  let tries = 0;
+  for (;;) {
+    const box = usedBox(best.planned.layout);
+    const sizes = [
+      { cols: box.cols - 1, rows: box.rows },
+      { cols: box.cols, rows: box.rows - 1 },
+    ]
+      .filter((b) => b.cols >= 2 && b.rows >= 2)
+      .sort((a, b) => a.cols * a.rows - b.cols * b.rows);
+    let better: Found | undefined;
+    for (const size of sizes) {
+      const board = makeBoard(kind, size.cols, size.rows, pitchMm);
+      const set0 = settingsFor(env, board, best.start.attempt, effort);
+      for (let k = 0; k < SHRINK_SEEDS && !better; k++) {
+        if (tries >= SHRINK_TRIES * SHRINK_SEEDS || env.stop()) return best;
+        tries++;
+        const set = { ...set0, seed: (set0.seed + k * 104729) % 2 ** 31, linkPlan: false };
+        const placed = placeOnBoard(problem, board, set);
+        if (!placed.ok) break;
+        const routed = routeRounds(env, placed, board, set, best.start.attempt, placed.anneal.steps, SHRINK_ROUNDS);
+        if (!routed) continue;
+        if (routed.planned.stats.holesUsed < best.planned.stats.holesUsed)
+          better = { ...routed, score: planScore(routed.planned.stats, pitchMm), start: { placed, board, attempt: best.start.attempt } };
+      }
+      if (better) break;
+    }
+    if (!better) return best;
+    best = better;
+  }
+}
+
 export function planLayout(design: Design, options: PlanOptionsInput, hooks: PlanHooks = {}, context: PlanContext = {}): Result<Planned> {
   const parsed = PlanOptionsSchema.safeParse(options);
   if (!parsed.success) return fail(zodProblems(parsed.error, 'place.options'));
@@ -284,11 +337,17 @@ export function planLayout(design: Design, options: PlanOptionsInput, hooks: Pla
   // A longer effort first plans as quick does, then carries on from that placement and
   // keeps the better layout: it is never worse than quick for the same seed. When quick
   // finds nothing, the longer effort searches afresh with all its steps.
-  const quick = opts.effort !== 'quick' && problem.parts.length > CARRY_PARTS ? undefined : search(env, 'quick');
+  // Small designs on an auto board go for the smallest board that routes (shrink): their
+  // layouts compare by holes used first, then by score.
+  const small = env.auto && opts.autoKind !== 'bus' && problem.parts.length <= SHRINK_PARTS;
+  const better = (a: Found, b: Found) => (small && a.planned.stats.holesUsed !== b.planned.stats.holesUsed ? a.planned.stats.holesUsed < b.planned.stats.holesUsed : a.score < b.score - 1e-9);
+  let quick = opts.effort !== 'quick' && problem.parts.length > CARRY_PARTS ? undefined : search(env, 'quick');
+  if (quick && small && !stopped) quick = shrink(env, 'quick', quick);
   let found = quick;
   if (opts.effort !== 'quick' && !stopped) {
     const longer = quick ? search(env, opts.effort, quick.start) : search(env, opts.effort);
-    if (longer && (!found || longer.score < found.score - 1e-9)) found = longer;
+    if (longer && (!found || better(longer, found))) found = longer;
+    if (found && small && !stopped) found = shrink(env, opts.effort, found);
   }
   if (found) return ok(found.planned, found.warnings);
   return fail([

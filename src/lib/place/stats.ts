@@ -20,6 +20,12 @@ export interface PlanStats {
 }
 
 export function holesUsed(layout: Layout): number {
+  const box = usedBox(layout);
+  return box.cols * box.rows;
+}
+
+/** The bounding box of every pin, link end and wire end (empty: 0 × 0). */
+export function usedBox(layout: Layout): { cols: number; rows: number } {
   let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
   const see = (h: readonly [number, number]) => {
     x0 = Math.min(x0, h[0]);
@@ -32,7 +38,7 @@ export function holesUsed(layout: Layout): number {
     see(l.from);
     see(l.to);
   }
-  return x1 < x0 ? 0 : (x1 - x0 + 1) * (y1 - y0 + 1);
+  return x1 < x0 ? { cols: 0, rows: 0 } : { cols: x1 - x0 + 1, rows: y1 - y0 + 1 };
 }
 
 export function layoutStats(
