@@ -3,18 +3,17 @@
  * net of two or more pins spreads one wire across the rows and one down the columns of its
  * bounding box (the usual probabilistic estimate); a row or column carrying more than
  * CAPACITY such wires costs the excess. A pin whose four neighbours all hold leads has no
- * way out for its wire and costs 2 more (1/2 with a single way out). O(leads + rows + cols).
+ * way out for its wire and costs 2 more (1/2 with a single way out). O(leads + nets + rows +
+ * cols); reads the nets' lead boxes as of the state's last settle.
  */
 import type { PlaceState } from './state.ts';
 
 /** Wires a row or column of pads takes comfortably (one on the pads, one beside them). */
 const CAPACITY = 2;
 
-export function padCongestion(s: PlaceState): number {
-  const rows = new Float64Array(s.H + 1);
-  const cols = new Float64Array(s.W + 1);
-  const lead = new Uint8Array(s.W * s.H);
-  for (const holes of s.netHoles) for (const h of holes) lead[h] = 1;
+/** Leads with no free neighbour count 2, with one 1/2 (what the state keeps on pad boards). */
+function boxedLeads(s: PlaceState): number {
+  const lead = s.tally.leadCount;
   let boxed = 0;
   for (const holes of s.netHoles)
     for (const h of holes) {
@@ -27,18 +26,26 @@ export function padCongestion(s: PlaceState): number {
       if (y + 1 < s.H && !lead[h + s.W]) free++;
       boxed += free === 0 ? 2 : free === 1 ? 0.5 : 0;
     }
+  return boxed;
+}
+
+/** Per-row and per-column wire loads (scratch, grown on demand). */
+let rows = new Float64Array(64);
+let cols = new Float64Array(64);
+
+export function padCongestion(s: PlaceState): number {
+  if (rows.length < s.H + 1) rows = new Float64Array(2 * s.H + 1);
+  if (cols.length < s.W + 1) cols = new Float64Array(2 * s.W + 1);
+  rows.fill(0, 0, s.H + 1);
+  cols.fill(0, 0, s.W + 1);
+  const boxed = s.map.padLike ? s.boxedLeads : boxedLeads(s);
   for (let n = 0; n < s.netHoles.length; n++) {
-    const holes = s.netHoles[n]!;
-    if (holes.length < 2) continue;
-    let x0 = Infinity, x1 = -1, y0 = Infinity, y1 = -1;
-    for (const h of holes) {
-      const x = h % s.W;
-      const y = (h - x) / s.W;
-      x0 = Math.min(x0, x);
-      x1 = Math.max(x1, x);
-      y0 = Math.min(y0, y);
-      y1 = Math.max(y1, y);
-    }
+    if (s.netHoles[n]!.length < 2) continue;
+    // The lead box as of the last settle (the cost is read after one).
+    const x0 = s.netMinX[n]!;
+    const x1 = s.netMaxX[n]!;
+    const y0 = s.netMinY[n]!;
+    const y1 = s.netMaxY[n]!;
     // A horizontal run loads the rows of the box share-wise; a vertical one the columns.
     const h = y1 - y0 + 1;
     const w = x1 - x0 + 1;

@@ -53,7 +53,10 @@ describe('CopperTally', () => {
   it('sees a segment with no free hole for a link as stranded', () => {
     const { t, owner } = tallyFor(3, 2);
     // row 0 full of leads: net 0 | net 1 | net 0; net 1 also on row 1.
-    [0, 1, 2].forEach((h) => (owner[h] = h));
+    [0, 1, 2].forEach((h) => {
+      owner[h] = h;
+      t.touchHole(h);
+    });
     t.add(0, 0);
     t.add(1, 1);
     t.add(2, 0);
@@ -96,6 +99,59 @@ describe('CopperTally', () => {
         expect({ cuts: t.cuts, links: t.links }).toEqual(recount(leads, 8));
       }),
       { numRuns: 150 },
+    );
+  });
+
+  it('matches a tally built afresh, bodies and all, and flushBack undoes a flush exactly', () => {
+    type Op = [hole: number, net: number, body: boolean];
+    // Short strips, so that bodies often fill a run's whole reach (a stranded segment).
+    const op = fc.tuple(fc.integer({ min: 0, max: 17 }), fc.integer({ min: 0, max: 3 }), fc.boolean());
+    const figures = (t: CopperTally) =>
+      JSON.parse(JSON.stringify({ cuts: t.cuts, links: t.links, stranded: t.stranded, cramped: t.cramped, linksW: t.linksW, strandedW: t.strandedW, segs: [...t.segs], runs: t.runs, lo: t.runLo, hi: t.runHi })) as unknown;
+    fc.assert(
+      fc.property(fc.array(op, { minLength: 20, maxLength: 60 }), fc.array(op, { minLength: 1, maxLength: 6 }), (ops: Op[], last: Op[]) => {
+        const { t, owner } = tallyFor(3, 6, 4);
+        const leads = new Map<number, number>();
+        // A body cell or a lead comes where there is none and goes where there is one; the
+        // returned function puts it back.
+        const apply = ([hole, net, body]: Op): (() => void) => {
+          if (body) {
+            owner[hole] = owner[hole] === -1 ? 7 : -1;
+            t.touchHole(hole);
+            return () => apply([hole, net, true]);
+          }
+          const had = leads.get(hole);
+          if (had === undefined) {
+            t.add(hole, net);
+            leads.set(hole, net);
+          } else {
+            t.remove(hole, had);
+            leads.delete(hole);
+          }
+          return () => apply([hole, had ?? net, false]);
+        };
+        ops.forEach((o, i) => {
+          apply(o);
+          if (i % 3 === 0) t.flush(() => {});
+        });
+        t.flush(() => {});
+        const fresh = tallyFor(3, 6, 4);
+        owner.forEach((o, h) => {
+          fresh.owner[h] = o;
+          fresh.t.touchHole(h);
+        });
+        leads.forEach((net, hole) => fresh.t.add(hole, net));
+        fresh.t.flush(() => {});
+        const before = figures(t);
+        expect(before).toEqual(figures(fresh.t));
+        // One more batch, flushed, then undone in reverse and put back with flushBack.
+        const undo = last.map(apply);
+        t.flush(() => {});
+        undo.reverse().forEach((f) => f());
+        t.flushBack(() => {});
+        expect(figures(t)).toEqual(before);
+      }),
+      { numRuns: 200 },
     );
   });
 });

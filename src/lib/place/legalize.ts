@@ -14,21 +14,34 @@ import type { PlaceState, Spot } from './state.ts';
 
 const CONFLICT = 20;
 
+/** Conductor and net of each lead of the pose being scored (scratch, grown on demand). */
+let leadCond = new Int32Array(64);
+let leadNet = new Int32Array(64);
+
 /** Pairs of a pose's leads on one conductor with different nets: cuts the part makes alone. */
-function ownConflicts(s: PlaceState, p: number, spot: Spot): number {
-  const pose = s.problem.parts[p]!.poses[spot.pose]!;
+function ownConflicts(s: PlaceState, p: number, x: number, y: number, pose: number): number {
   const nets = s.pinNet[p]!;
-  const seen = new Map<number, Set<number>>();
+  const q = s.pinOff[s.poseBase[p]! + pose]!;
+  if (nets.length > leadCond.length) {
+    leadCond = new Int32Array(nets.length * 2);
+    leadNet = new Int32Array(nets.length * 2);
+  }
   let extra = 0;
-  pose.pins.forEach((o, i) => {
-    const c = s.map.cond[spot.x + o[0] + (spot.y + o[1]) * s.W]!;
-    let set = seen.get(c);
-    if (!set) seen.set(c, (set = new Set()));
-    if (!set.has(nets[i]!)) {
-      if (set.size > 0) extra++;
-      set.add(nets[i]!);
+  for (let i = 0; i < nets.length; i++) {
+    const c = s.map.cond[x + s.pinX[q + i]! + (y + s.pinY[q + i]!) * s.W]!;
+    const net = nets[i]!;
+    // A net new to a conductor that already has one: one more cut.
+    let sameCond = false;
+    let seen = false;
+    for (let j = 0; j < i && !seen; j++) {
+      if (leadCond[j] !== c) continue;
+      sameCond = true;
+      seen = leadNet[j] === net;
     }
-  });
+    if (!seen && sameCond) extra++;
+    leadCond[i] = c;
+    leadNet[i] = net;
+  }
   return extra;
 }
 
@@ -50,23 +63,26 @@ export function legalize(s: PlaceState, centres: { x: number; y: number }[], fix
     let best: Spot | undefined;
     let bestScore = Infinity;
     for (let d = 0; d <= maxD && d < bestScore; d++) {
-      part.poses.forEach((pose, k) => {
+      for (let k = 0; k < part.poses.length; k++) {
+        const pose = part.poses[k]!;
         const ax = Math.round(c.x - (pose.minX + pose.maxX) / 2);
         const ay = Math.round(c.y - (pose.minY + pose.maxY) / 2);
         const spanCost = part.fp.span && pose.span !== undefined ? 0.5 * Math.abs(pose.span - part.fp.span.preferred) : 0;
         for (let dx = -d; dx <= d; dx++) {
           const rest = d - Math.abs(dx);
-          for (const dy of rest === 0 ? [0] : [-rest, rest]) {
-            const spot = { x: ax + dx, y: ay + dy, pose: k };
-            if (!s.fits(p, spot)) continue;
-            const score = CONFLICT * ownConflicts(s, p, spot) + d + spanCost;
+          // rest 0: one site (dy 0); otherwise dy −rest, then +rest
+          for (let dy = -rest; dy <= rest; dy += rest ? 2 * rest : 1) {
+            const x = ax + dx;
+            const y = ay + dy;
+            if (!s.fitsAt(p, x, y, k)) continue;
+            const score = CONFLICT * ownConflicts(s, p, x, y, k) + d + spanCost;
             if (score < bestScore) {
               bestScore = score;
-              best = spot;
+              best = { x, y, pose: k };
             }
           }
         }
-      });
+      }
     }
     if (best) s.place(p, best);
     else failed.push(p);

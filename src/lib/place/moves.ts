@@ -1,6 +1,7 @@
 /**
- * Move proposals for the detailed placement. `proposeMove(ctx, radius)` returns the parts to
- * move and their new spots, or a gate swap; it never changes the state itself.
+ * Move proposals for the detailed placement. `proposeMove(ctx, radius, move): boolean` fills
+ * `move` (from `moveBuffer(parts)`, reused step after step) with the parts to move and their
+ * new spots, or a gate swap, and says whether it found one; it never changes the state.
  *
  * Moves: shift a part within `radius`; change its pose (turn, or bend its leads to another
  * span) about its first lead; trade places with a part of the same footprint; trade places
@@ -8,11 +9,27 @@
  * lead's conductor (the move that removes cuts and links fastest); slide every part beyond a
  * line (a band of them) by one hole; swap two sections of a multi-section op-amp package.
  */
-import type { PlaceState, Spot } from './state.ts';
+import type { PlaceState } from './state.ts';
 import type { Rng } from './rng.ts';
 import type { SectionTable } from './sections.ts';
 
-export type Move = { kind: 'parts'; parts: number[]; spots: Spot[] } | { kind: 'gate'; table: number; a: number; b: number };
+/** A proposed move: parts[0..n) to spots (x, y, pose), or (gate) sections a and b of a table swapped. */
+export interface MoveBuffer {
+  gate: boolean;
+  n: number;
+  parts: Int32Array;
+  x: Int32Array;
+  y: Int32Array;
+  pose: Int32Array;
+  table: number;
+  a: number;
+  b: number;
+}
+
+export function moveBuffer(parts: number): MoveBuffer {
+  const n = Math.max(2, parts);
+  return { gate: false, n: 0, parts: new Int32Array(n), x: new Int32Array(n), y: new Int32Array(n), pose: new Int32Array(n), table: 0, a: 0, b: 0 };
+}
 
 export interface MoveContext {
   s: PlaceState;
@@ -23,71 +40,111 @@ export interface MoveContext {
   tables: SectionTable[];
   /** Parts to move more often (on nets the router or the link plan could not join). */
   focus: number[];
+  /** Index of each hole in its conductor's hole list (see linePlaces). */
+  lineAt: Int32Array;
+  /** The movable parts as a bit mask (see partMask). */
+  movableMask: Int32Array;
 }
 
-function centre(s: PlaceState, p: number, spot: Spot): { cx: number; cy: number } {
-  const pose = s.problem.parts[p]!.poses[spot.pose]!;
-  return { cx: spot.x + (pose.minX + pose.maxX) / 2, cy: spot.y + (pose.minY + pose.maxY) / 2 };
+/** A bit per part, set for the given parts (for MoveContext.movableMask). */
+export function partMask(s: PlaceState, parts: number[]): Int32Array {
+  const mask = new Int32Array(s.partWords);
+  for (const p of parts) mask[p >> 5]! |= 1 << (p & 31);
+  return mask;
 }
 
-function at(s: PlaceState, p: number, pose: number, cx: number, cy: number): Spot {
-  const o = s.problem.parts[p]!.poses[pose]!;
-  return { x: Math.round(cx - (o.minX + o.maxX) / 2), y: Math.round(cy - (o.minY + o.maxY) / 2), pose };
+/** Index of each hole along its conductor's hole list, for MoveContext.lineAt. */
+export function linePlaces(s: PlaceState): Int32Array {
+  const at = new Int32Array(s.W * s.H);
+  for (const line of s.map.holes) line.forEach((h, i) => (at[h] = i));
+  return at;
 }
 
-function hop(ctx: MoveContext, p: number): Move | undefined {
+function one(m: MoveBuffer, p: number, x: number, y: number, pose: number): true {
+  m.gate = false;
+  m.n = 1;
+  m.parts[0] = p;
+  m.x[0] = x;
+  m.y[0] = y;
+  m.pose[0] = pose;
+  return true;
+}
+
+function two(m: MoveBuffer, p: number, px: number, py: number, pp: number, q: number, qx: number, qy: number, qp: number): true {
+  one(m, p, px, py, pp);
+  m.n = 2;
+  m.parts[1] = q;
+  m.x[1] = qx;
+  m.y[1] = qy;
+  m.pose[1] = qp;
+  return true;
+}
+
+/** Centre of part p's current body, along x and along y. */
+function centreX(s: PlaceState, p: number): number {
+  const g = s.poseBase[p]! + s.pose[p]!;
+  return s.x[p]! + (s.poseMinX[g]! + s.poseMaxX[g]!) / 2;
+}
+
+function centreY(s: PlaceState, p: number): number {
+  const g = s.poseBase[p]! + s.pose[p]!;
+  return s.y[p]! + (s.poseMinY[g]! + s.poseMaxY[g]!) / 2;
+}
+
+function hop(ctx: MoveContext, p: number, m: MoveBuffer): boolean {
   const { s, rng } = ctx;
   const part = s.problem.parts[p]!;
   const pin = rng.int(part.pinNames.length);
   const net = s.pinNet[p]![pin]!;
   const mates = s.netHoles[net]!;
-  if (mates.length < 2) return undefined;
+  if (mates.length < 2) return false;
   const h = mates[rng.int(mates.length)]!;
-  if (s.owner[h] === p) return undefined;
-  const c = s.map.cond[h]!;
-  const line = s.map.holes[c]!;
-  const i = line.indexOf(h);
+  if (s.owner[h] === p) return false;
+  const line = s.map.holes[s.map.cond[h]!]!;
+  const i = ctx.lineAt[h]!;
   const step = (1 + rng.int(4)) * (rng.next() < 0.5 ? -1 : 1);
   const target = line[i + step];
-  if (target === undefined) return undefined;
+  if (target === undefined) return false;
   const pose = rng.next() < 0.7 ? s.pose[p]! : rng.int(part.poses.length);
-  const o = part.poses[pose]!.pins[pin]!;
+  const q = s.pinOff[s.poseBase[p]! + pose]! + pin;
   const tx = target % s.W;
   const ty = (target - tx) / s.W;
-  return { kind: 'parts', parts: [p], spots: [{ x: tx - o[0], y: ty - o[1], pose }] };
+  return one(m, p, tx - s.pinX[q]!, ty - s.pinY[q]!, pose);
 }
 
 /** How deep a band of parts one slide moves (holes across the band). */
 const BAND = 6;
 
-function slide(ctx: MoveContext): Move | undefined {
+function slide(ctx: MoveContext, m: MoveBuffer): boolean {
   const { s, rng } = ctx;
   const vertical = rng.next() < 0.5;
   const line = vertical ? rng.int(s.H) : rng.int(s.W);
   const d = rng.next() < 0.5 ? -1 : 1;
-  const parts: number[] = [];
-  const spots: Spot[] = [];
-  for (const p of ctx.movable) {
-    const pose = s.problem.parts[p]!.poses[s.pose[p]!]!;
-    const lo = vertical ? s.y[p]! + pose.minY : s.x[p]! + pose.minX;
-    if (lo < line || lo >= line + BAND) continue;
-    parts.push(p);
-    spots.push({ x: s.x[p]! + (vertical ? 0 : d), y: s.y[p]! + (vertical ? d : 0), pose: s.pose[p]! });
+  const dx = vertical ? 0 : d;
+  const dy = vertical ? d : 0;
+  // The movable parts whose body starts in the band, in index order.
+  const n = s.partsWithin(vertical, line, line + BAND, ctx.movableMask, m.parts);
+  for (let i = 0; i < n; i++) {
+    const p = m.parts[i]!;
+    m.x[i] = s.x[p]! + dx;
+    m.y[i] = s.y[p]! + dy;
+    m.pose[i] = s.pose[p]!;
   }
-  return parts.length ? { kind: 'parts', parts, spots } : undefined;
+  m.gate = false;
+  m.n = n;
+  return n > 0;
 }
 
 /** Up to a few tries for a move that is legal as far as a single part's own check tells. */
-export function proposeMove(ctx: MoveContext, radius: number): Move | undefined {
+export function proposeMove(ctx: MoveContext, radius: number, m: MoveBuffer): boolean {
   for (let i = 0; i < 6; i++) {
-    const m = proposeOnce(ctx, radius);
-    if (!m) continue;
-    if (m.kind === 'gate' || m.parts.length > 1 || ctx.s.fits(m.parts[0]!, m.spots[0]!)) return m;
+    if (!proposeOnce(ctx, radius, m)) continue;
+    if (m.gate || m.n > 1 || ctx.s.fitsAt(m.parts[0]!, m.x[0]!, m.y[0]!, m.pose[0]!)) return true;
   }
-  return undefined;
+  return false;
 }
 
-function proposeOnce(ctx: MoveContext, radius: number): Move | undefined {
+function proposeOnce(ctx: MoveContext, radius: number, m: MoveBuffer): boolean {
   const { s, rng, movable } = ctx;
   const p = ctx.focus.length && rng.next() < 0.5 ? ctx.focus[rng.int(ctx.focus.length)]! : movable[rng.int(movable.length)]!;
   const part = s.problem.parts[p]!;
@@ -95,36 +152,55 @@ function proposeOnce(ctx: MoveContext, radius: number): Move | undefined {
   if (r < 0.35) {
     const dx = rng.int(2 * radius + 1) - radius;
     const dy = rng.int(2 * radius + 1) - radius;
-    if (!dx && !dy) return undefined;
-    return { kind: 'parts', parts: [p], spots: [{ x: s.x[p]! + dx, y: s.y[p]! + dy, pose: s.pose[p]! }] };
+    if (!dx && !dy) return false;
+    return one(m, p, s.x[p]! + dx, s.y[p]! + dy, s.pose[p]!);
   }
   if (r < 0.5) {
-    if (part.poses.length < 2) return undefined;
+    if (part.poses.length < 2) return false;
     const pose = rng.int(part.poses.length);
-    const old = part.poses[s.pose[p]!]!.pins[0]!;
-    const now = part.poses[pose]!.pins[0]!;
-    return { kind: 'parts', parts: [p], spots: [{ x: s.x[p]! + old[0] - now[0], y: s.y[p]! + old[1] - now[1], pose }] };
+    const old = s.pinOff[s.poseBase[p]! + s.pose[p]!]!;
+    const now = s.pinOff[s.poseBase[p]! + pose]!;
+    return one(m, p, s.x[p]! + s.pinX[old]! - s.pinX[now]!, s.y[p]! + s.pinY[old]! - s.pinY[now]!, pose);
   }
-  if (r < 0.75) return hop(ctx, p);
+  if (r < 0.75) return hop(ctx, p, m);
   if (r < 0.85) {
     const group = ctx.groups.get(part.swapKey);
     if (group) {
       const q = group[rng.int(group.length)]!;
-      if (q === p) return undefined;
-      return { kind: 'parts', parts: [p, q], spots: [s.spotOf(q), s.spotOf(p)] };
+      if (q === p) return false;
+      return two(m, p, s.x[q]!, s.y[q]!, s.pose[q]!, q, s.x[p]!, s.y[p]!, s.pose[p]!);
     }
     const q = movable[rng.int(movable.length)]!;
-    if (q === p) return undefined;
-    const a = centre(s, p, s.spotOf(p));
-    const b = centre(s, q, s.spotOf(q));
-    return { kind: 'parts', parts: [p, q], spots: [at(s, p, s.pose[p]!, b.cx, b.cy), at(s, q, s.pose[q]!, a.cx, a.cy)] };
+    if (q === p) return false;
+    const ax = centreX(s, p);
+    const ay = centreY(s, p);
+    const bx = centreX(s, q);
+    const by = centreY(s, q);
+    const gp = s.poseBase[p]! + s.pose[p]!;
+    const gq = s.poseBase[q]! + s.pose[q]!;
+    return two(
+      m,
+      p,
+      Math.round(bx - (s.poseMinX[gp]! + s.poseMaxX[gp]!) / 2),
+      Math.round(by - (s.poseMinY[gp]! + s.poseMaxY[gp]!) / 2),
+      s.pose[p]!,
+      q,
+      Math.round(ax - (s.poseMinX[gq]! + s.poseMaxX[gq]!) / 2),
+      Math.round(ay - (s.poseMinY[gq]! + s.poseMaxY[gq]!) / 2),
+      s.pose[q]!,
+    );
   }
   if (r < 0.92 && ctx.tables.length) {
     const table = rng.int(ctx.tables.length);
     const n = ctx.tables[table]!.slots.length;
     const a = rng.int(n);
     const b = rng.int(n);
-    return a === b ? undefined : { kind: 'gate', table, a, b };
+    if (a === b) return false;
+    m.gate = true;
+    m.table = table;
+    m.a = a;
+    m.b = b;
+    return true;
   }
-  return slide(ctx);
+  return slide(ctx, m);
 }
