@@ -16,8 +16,8 @@
  * board to the parts plus a margin of 1, then 2 holes and polishes the placement there (designs up
  * to 50 parts; bigger ones are only moved), routes (routeLayout) and verifies
  * (verifyLayout) from scratch. When the router names nets it could not join, the same
- * placement gets a free column where a straight link could join them (spread.ts: cuts and
- * links stay as they were), or else those nets weigh more and it is polished again — up to
+ * placement gets a free column where a straight link could join them, or a free strip near
+ * them (spread.ts: cuts and links stay as they were), or else those nets weigh more and it is polished again — up to
  * ROUNDS routings, each cheap next to a fresh annealing. A failed attempt is retried on a
  * bigger board (auto) or with the next seed, with a looser area weight; when all fail the
  * result is `place.no-layout` with every reason. Normal and thorough effort first plan as
@@ -46,7 +46,7 @@ import { lockedSpots } from './locked.ts';
 import { designAfterSwaps, placementLayout } from './output.ts';
 import { EFFORT_STEPS, placeOnBoard, polishOnBoard, reweighAndPolish, type BoardSettings, type Placed } from './place-board.ts';
 import type { PlaceProblem } from './problem.ts';
-import { spreadColumns } from './spread.ts';
+import { spreadLanes } from './spread.ts';
 import type { Spot } from './state.ts';
 import { buildProblem } from './problem.ts';
 import { cropBoard, workingBoard } from './board-size.ts';
@@ -213,7 +213,7 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
     // board that may not grow, once) weigh those nets more and polish the placement again.
     // Small designs are repaired first: a polish is cheap for them and keeps the board small.
     const repairFirst = !repaired && problem.parts.length <= REPAIR_PARTS;
-    const wide = canSpread && !repairFirst ? spreadColumns(cur.state, frame, ids) : undefined;
+    const wide = canSpread && !repairFirst ? spreadLanes(cur.state, frame, ids) : undefined;
     const moved = wide && polishOnBoard(problem, cur, wide.board, wide.spots, set, { share: 0 });
     if (wide && moved?.ok) {
       cur = moved;

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { copperMap } from './copper-map.ts';
 import { plantedInstance } from './planted.ts';
 import { buildProblem } from './problem.ts';
-import { spreadColumns } from './spread.ts';
+import { spreadLanes } from './spread.ts';
 import { PlaceState, type Spot } from './state.ts';
 import type { Board } from '../model/layout.ts';
 import { makeBoard } from '../board/grid.ts';
@@ -18,24 +18,31 @@ function stateAt(problem: ReturnType<typeof buildProblem>, board: Board, spots: 
   return s;
 }
 
-describe('spreadColumns', () => {
-  it('adds free columns only between bodies: every lead keeps its row and order, cuts and links stay', () => {
+describe('spreadLanes', () => {
+  it('adds free columns and rows only between bodies: every lead keeps its strip and order, cuts and links stay', () => {
     fc.assert(
       fc.property(fc.integer({ min: 1, max: 10_000 }), fc.array(fc.nat(), { minLength: 1, maxLength: 4 }), (seed, picks) => {
         const inst = plantedInstance(14, seed);
         const problem = buildProblem(inst.design, { padsEdge: 'left' });
         const before = stateAt(problem, inst.board, inst.spots);
         const nets = picks.map((k) => k % problem.nets.length);
-        const wide = spreadColumns(before, inst.board, nets);
+        const wide = spreadLanes(before, inst.board, nets);
         if (!wide) return;
-        expect(wide.board.cols).toBeGreaterThan(inst.board.cols);
-        expect(wide.board.rows).toBe(inst.board.rows);
+        expect(wide.board.cols + wide.board.rows).toBeGreaterThan(inst.board.cols + inst.board.rows);
         const after = stateAt(problem, wide.board, wide.spots);
+        const addedRows = wide.board.rows - inst.board.rows;
         wide.spots.forEach((spot, p) => {
-          expect(spot.y).toBe(inst.spots[p]!.y);
+          expect(spot.y - inst.spots[p]!.y).toBeGreaterThanOrEqual(0);
+          expect(spot.y - inst.spots[p]!.y).toBeLessThanOrEqual(addedRows);
           expect(spot.pose).toBe(inst.spots[p]!.pose);
           expect(spot.x).toBeGreaterThanOrEqual(inst.spots[p]!.x);
         });
+        // Leads that shared a strip still do, in the same order: rows move as a block.
+        problem.parts.forEach((_, p) =>
+          problem.parts.forEach((__, q) => {
+            if (inst.spots[p]!.y === inst.spots[q]!.y) expect(wide.spots[p]!.y).toBe(wide.spots[q]!.y);
+          }),
+        );
         expect(after.tally.cuts).toBe(before.tally.cuts);
         expect(after.tally.links).toBe(before.tally.links);
       }),
@@ -51,8 +58,8 @@ describe('spreadColumns', () => {
     let tried = 0;
     for (let n = 0; n < problem.nets.length && tried < 5; n++) {
       if (s.tally.segs[n]! < 2) continue;
-      const wide = spreadColumns(s, inst.board, [n]);
-      if (!wide) continue;
+      const wide = spreadLanes(s, inst.board, [n]);
+      if (!wide || wide.board.rows !== inst.board.rows) continue;
       tried++;
       expect(wide.board.cols).toBe(inst.board.cols + 1);
       const after = stateAt(problem, wide.board, wide.spots);
@@ -73,11 +80,38 @@ describe('spreadColumns', () => {
     expect(tried).toBeGreaterThan(0);
   });
 
+  it('gives a net whose segments share no column reach a free strip between its rows', () => {
+    let found = 0;
+    for (let seed = 1; seed <= 40 && found < 3; seed++) {
+      const inst = plantedInstance(20, seed);
+      const problem = buildProblem(inst.design, { padsEdge: 'left' });
+      const s = stateAt(problem, inst.board, inst.spots);
+      for (let n = 0; n < problem.nets.length; n++) {
+        if (s.tally.segs[n]! < 2) continue;
+        const wide = spreadLanes(s, inst.board, [n]);
+        if (!wide || wide.board.rows === inst.board.rows) continue;
+        found++;
+        expect(wide.board.rows).toBe(inst.board.rows + 1);
+        expect(wide.board.cols).toBe(inst.board.cols);
+        const after = stateAt(problem, wide.board, wide.spots);
+        const W = wide.board.cols;
+        const rowsOf = (st: PlaceState) => [...new Set((st.netHoles[n] ?? []).map((h) => Math.floor(h / W)))];
+        const [lo, hi] = [Math.min(...rowsOf(after)), Math.max(...rowsOf(after))];
+        // A row with no lead and no body among or beside the net's rows: a free strip.
+        const free = Array.from({ length: wide.board.rows }, (_, y) => y).filter((y) => y >= lo - 1 && y <= hi + 1 && Array.from({ length: W }, (_, x) => after.owner[x + y * W]).every((o) => o === -1));
+        expect(free.length).toBeGreaterThan(0);
+        expect(after.tally.cuts).toBe(s.tally.cuts);
+        break;
+      }
+    }
+    expect(found).toBeGreaterThan(0);
+  });
+
   it('leaves boards with their own copper alone', () => {
     const inst = plantedInstance(6, 1);
     const problem = buildProblem(inst.design, { padsEdge: 'left' });
     const own: Board = { ...makeBoard('strip', inst.board.cols, inst.board.rows), conductors: [] };
     const s = stateAt(problem, inst.board, inst.spots);
-    expect(spreadColumns(s, own, [0])).toBeUndefined();
+    expect(spreadLanes(s, own, [0])).toBeUndefined();
   });
 });

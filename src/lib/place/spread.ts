@@ -1,33 +1,37 @@
 /**
- * `spreadColumns(state, board, nets): { board, spots } | undefined` — make link room
- * in a finished placement without placing it again: insert free columns of holes between
- * parts and shift everything right of each by one hole.
+ * `spreadLanes(state, board, nets): { board, spots } | undefined` — make link room in a
+ * finished placement without placing it again: insert free columns (and, on strip boards,
+ * free rows) of holes between parts and shift everything beyond each by one hole.
  *
- * A column goes in only where no part's body crosses the boundary, so every lead keeps its
- * row and its order along the row: on a strip board the cuts and the segments to join stay
- * exactly what they were, and each new column is a clear lane for links (on a pad board,
- * a clear lane for wires; on a breadboard pattern, a fresh bus column). For each net in
- * `nets` (those the router could not join) one column goes where both of two of its
- * segments on different rows reach (strip boards), or in the middle of its leads (other
- * boards). Undefined when no column helps or may be added (boards with their own copper
- * other than the breadboard pattern keep their size).
+ * A column or row goes in only where no part's body crosses the boundary, so every lead
+ * keeps its strip and its order along it: on a strip board the cuts and the segments to join
+ * stay exactly what they were; each new column is a clear lane for links (on a pad board, a
+ * clear lane for wires; on a breadboard pattern, a fresh bus column) and each new row a free
+ * strip, a relay any net may borrow. For each net in `nets` (those the router could not
+ * join) one column goes where both of two of its segments on different rows reach (strip
+ * boards), or in the middle of its leads (other boards); on a strip board a net with no such
+ * column gets a free row among (or beside) the rows of its leads instead. Undefined when nothing helps or
+ * may be added (boards with their own copper other than the breadboard pattern keep their
+ * size).
  */
 import type { Board } from '../model/layout.ts';
 import { breadboardBoard } from '../board/breadboard.ts';
 import { makeBoard } from '../board/grid.ts';
 import type { PlaceState, Spot } from './state.ts';
 
-/** Widest a board may grow to (the same bound as the working board's). */
+/** Widest and tallest a board may grow to (the same bounds as the working board's). */
 const MAX_COLS = 400;
+const MAX_ROWS = 400;
 
-/** Boundaries b (between columns b − 1 and b) that no body crosses. */
-function openBoundaries(s: PlaceState): Uint8Array {
-  const open = new Uint8Array(s.W + 1).fill(1);
+/** Boundaries b (between columns, or rows, b − 1 and b) that no body crosses. */
+function openBoundaries(s: PlaceState, rows: boolean): Uint8Array {
+  const open = new Uint8Array((rows ? s.H : s.W) + 1).fill(1);
   s.problem.parts.forEach((part, p) => {
     const k = s.pose[p]!;
     if (k < 0) return;
     const pose = part.poses[k]!;
-    for (let b = s.x[p]! + pose.minX + 1; b <= s.x[p]! + pose.maxX; b++) open[b] = 0;
+    const [at, lo, hi] = rows ? [s.y[p]!, pose.minY, pose.maxY] : [s.x[p]!, pose.minX, pose.maxX];
+    for (let b = at + lo + 1; b <= at + hi; b++) open[b] = 0;
   });
   return open;
 }
@@ -88,27 +92,52 @@ function netMiddle(s: PlaceState, net: number): number {
   return (x0 + x1 + 1) / 2;
 }
 
-export function spreadColumns(s: PlaceState, board: Board, nets: number[]): { board: Board; spots: Spot[] } | undefined {
+/** First and last row of a net's leads. */
+function netRows(s: PlaceState, net: number): [number, number] {
+  let y0 = Infinity;
+  let y1 = -Infinity;
+  for (const h of s.netHoles[net] ?? []) {
+    y0 = Math.min(y0, Math.floor(h / s.W));
+    y1 = Math.max(y1, Math.floor(h / s.W));
+  }
+  return [y0, y1];
+}
+
+/** How many of the sorted boundaries lie at or before `at`. */
+function shiftAt(boundaries: number[], at: number): number {
+  let k = 0;
+  while (k < boundaries.length && boundaries[k]! <= at) k++;
+  return k;
+}
+
+export function spreadLanes(s: PlaceState, board: Board, nets: number[]): { board: Board; spots: Spot[] } | undefined {
   const breadboard = board.pattern?.startsWith('breadboard') ?? false;
   if (board.conductors && !breadboard) return undefined;
   const box = s.bounds();
   if (!box) return undefined;
-  const open = openBoundaries(s);
-  const chosen = new Set<number>();
+  const openCols = openBoundaries(s, false);
+  const openRows = openBoundaries(s, true);
+  const colSet = new Set<number>();
+  const rowSet = new Set<number>();
   for (const n of nets) {
-    const lane = s.map.alongRows ? laneBetweenSegments(s, open, n) : nearestOpen(open, netMiddle(s, n), box.x0 + 1, box.x1);
-    if (lane >= 0) chosen.add(lane);
+    const lane = s.map.alongRows ? laneBetweenSegments(s, openCols, n) : nearestOpen(openCols, netMiddle(s, n), box.x0 + 1, box.x1);
+    if (lane >= 0) colSet.add(lane);
+    else if (s.map.alongRows && !breadboard) {
+      const [lo, hi] = netRows(s, n);
+      const row = nearestOpen(openRows, (lo + hi + 1) / 2, Math.max(0, lo), Math.min(s.H, hi + 1));
+      if (row >= 0) rowSet.add(row);
+    }
   }
-  if (!chosen.size || s.W + chosen.size > MAX_COLS) return undefined;
-  const cuts = [...chosen].sort((a, b) => a - b);
+  if ((!colSet.size && !rowSet.size) || s.W + colSet.size > MAX_COLS || s.H + rowSet.size > MAX_ROWS) return undefined;
+  const cols = [...colSet].sort((a, b) => a - b);
+  const rows = [...rowSet].sort((a, b) => a - b);
   const spots = s.problem.parts.map((part, p) => {
     const spot = s.spotOf(p);
-    const left = spot.x + part.poses[spot.pose]!.minX;
-    let shift = 0;
-    while (shift < cuts.length && cuts[shift]! <= left) shift++;
-    return { ...spot, x: spot.x + shift };
+    const pose = part.poses[spot.pose]!;
+    return { ...spot, x: spot.x + shiftAt(cols, spot.x + pose.minX), y: spot.y + shiftAt(rows, spot.y + pose.minY) };
   });
-  const cols = s.W + cuts.length;
-  const grown = breadboard ? breadboardBoard(cols, board.pitchMm) : makeBoard(board.kind, cols, board.rows, board.pitchMm);
+  const W = s.W + cols.length;
+  const H = s.H + rows.length;
+  const grown = breadboard ? breadboardBoard(W, board.pitchMm) : makeBoard(board.kind, W, H, board.pitchMm);
   return { board: grown, spots };
 }
