@@ -45,6 +45,8 @@ export type PlanOptionsInput = z.input<typeof PlanOptionsSchema>;
 export const RouteOptionsSchema = z.object({
   cutStyle: CutStyleSchema.default('either'),
   linksOverBodies: z.boolean().default(false),
+  /** Last resort for a net no straight link joins: an insulated wire link in any direction (reported as a warning). */
+  insulatedLinks: z.boolean().default(false),
 });
 export type RouteOptions = z.infer<typeof RouteOptionsSchema>;
 export type RouteOptionsInput = z.input<typeof RouteOptionsSchema>;

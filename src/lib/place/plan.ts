@@ -46,7 +46,7 @@ import { lockedSpots } from './locked.ts';
 import { designAfterSwaps, placementLayout } from './output.ts';
 import { EFFORT_STEPS, placeOnBoard, polishOnBoard, reweighAndPolish, type BoardSettings, type Placed } from './place-board.ts';
 import type { PlaceProblem } from './problem.ts';
-import { spreadLanes } from './spread.ts';
+import { failedNets, spreadLanes } from './spread.ts';
 import type { Spot } from './state.ts';
 import { buildProblem } from './problem.ts';
 import { cropBoard, workingBoard } from './board-size.ts';
@@ -82,6 +82,12 @@ const ATTEMPTS = { auto: 6, fixed: 3 };
 const MARGINS = [1, 2];
 /** Routing rounds per placement: after a failure the placement is spread by a free column or repaired. */
 const ROUNDS = 8;
+/**
+ * From this round on, designs of more than REPAIR_PARTS parts may use insulated wire links
+ * for nets nothing else joins (smaller ones only in the last round): by then spreading has
+ * left few such nets (300 planted parts: 21 nets in pieces, then 16, 10, 6).
+ */
+const INSULATED_ROUND = 3;
 /** Designs up to this many parts are repaired before they are spread, with the greedy link plan in view. */
 const REPAIR_PARTS = 50;
 /** How much more a net the router could not join weighs in a repair round. */
@@ -192,7 +198,9 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
     const routedDesign = designAfterSwaps(design, cur.state, problem.sections, cur.slotSections);
     const placement = placementLayout(cur.state, routedDesign, frame, new Set(env.locked.keys()));
     env.progress('route', round / ROUNDS, cur.anneal.cost, cur.anneal.cost);
-    const routed = routeLayout(routedDesign, placement, { cutStyle: opts.cutStyle, linksOverBodies: opts.linksOverBodies });
+    // Insulated wire links only as a late resort, never while shrinking (see INSULATED_ROUND).
+    const insulated = rounds === ROUNDS && round >= (problem.parts.length > REPAIR_PARTS ? INSULATED_ROUND : ROUNDS - 1);
+    const routed = routeLayout(routedDesign, placement, { cutStyle: opts.cutStyle, linksOverBodies: opts.linksOverBodies, insulatedLinks: insulated });
     if (routed.ok) {
       env.progress('verify', 0, cur.anneal.cost, cur.anneal.cost);
       const report = verifyLayout(env.circuit, routed.value.layout);
@@ -203,17 +211,17 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
       const layout: Layout = { ...routed.value.layout, meta: { program: PROGRAM, seed: opts.seed, effort: opts.effort, attempt: attempt + 1 } };
       const cost = placementCost(cur.state, set.weights).total;
       const stats = layoutStats(layout, routed.value.stats, cost, problem.parts.length, attempt + 1, steps + cur.anneal.steps);
-      return { planned: { layout, design: routedDesign, stats }, warnings: report.warnings };
+      return { planned: { layout, design: routedDesign, stats }, warnings: [...routed.warnings, ...report.warnings] };
     }
     env.reasons.push(`${boardName(frame)}: ${routed.problems[0]?.message ?? 'did not route'}`);
     if (round === rounds - 1 || env.stop()) return undefined;
-    const nets = routed.problems.flatMap((p) => p.nets ?? []);
-    const ids = [...new Set(nets)].map((n) => problem.nets.findIndex((x) => x.name === n)).filter((i) => i >= 0);
+    const failed = failedNets(cur.state, routed.problems);
+    const ids = failed.map((f) => f.net);
     // A free column where it lets a straight link join the failed nets; else (or on a
     // board that may not grow, once) weigh those nets more and polish the placement again.
     // Small designs are repaired first: a polish is cheap for them and keeps the board small.
     const repairFirst = !repaired && problem.parts.length <= REPAIR_PARTS;
-    const wide = canSpread && !repairFirst ? spreadLanes(cur.state, frame, ids) : undefined;
+    const wide = canSpread && !repairFirst ? spreadLanes(cur.state, frame, failed) : undefined;
     const moved = wide && polishOnBoard(problem, cur, wide.board, wide.spots, set, { share: 0 });
     if (wide && moved?.ok) {
       cur = moved;

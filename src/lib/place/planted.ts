@@ -5,8 +5,9 @@
  * Random parts (resistors, small capacitors, diodes, TO-92 transistors, now and then a
  * DIP-8) are dropped at random legal spots of a strip board about 2.5 times their body area,
  * upright poses preferred; each strip is cut between neighbouring leads at random (always
- * between two leads of one part), a few random links join segments, and the netlist is read
- * off the copper. The result is the design, the board, and the planted spots, whose cost is
+ * between two leads of one part), a few straight links across the strips join segments
+ * (each over free holes, landing in free holes of the two segments' copper), and the
+ * netlist is read off the copper. The result is the design, the board, and the planted spots, whose cost is
  * an upper bound on the optimum: a planner that re-plans the scrambled design should come
  * in at or under it.
  */
@@ -102,13 +103,48 @@ export function plantedInstance(count: number, seed: number): PlantedInstance {
       lastOwner = p;
     }
   }
-  const links = Math.floor(segments.length * 0.1);
-  for (let i = 0; i < links; i++) {
-    const a = rng.int(segments.length);
-    const b = rng.int(segments.length);
-    const pa = find(a);
-    const pb = find(b);
-    if (pa !== pb) parent[pa] = pb;
+  // Straight links across the strips, each over free holes (no lead, no body, no other
+  // link) from a free hole in one segment's copper to a free hole in another's: the planted
+  // layout is then a real answer, routable as it stands. A segment's copper reaches halfway
+  // to its neighbours' leads (the cut goes between); a strip with no leads is passed over.
+  const segAt = new Int32Array(cols * rows).fill(-1);
+  for (let y = 0; y < rows; y++) {
+    const runs: { seg: number; a: number; b: number }[] = [];
+    for (let x = 0; x < cols; x++) {
+      const seg = segOf.get(x + y * cols);
+      if (seg === undefined) continue;
+      const last = runs[runs.length - 1];
+      if (last && last.seg === seg) last.b = x;
+      else runs.push({ seg, a: x, b: x });
+    }
+    runs.forEach((r, k) => {
+      const from = k === 0 ? 0 : Math.floor((runs[k - 1]!.b + r.a) / 2) + 1;
+      const to = k === runs.length - 1 ? cols - 1 : Math.floor((r.b + runs[k + 1]!.a) / 2);
+      for (let x = from; x <= to; x++) segAt[x + y * cols] = r.seg;
+    });
+  }
+  const used = new Uint8Array(cols * rows);
+  const free = (h: number) => state.owner[h] === -1 && !used[h];
+  const want = Math.floor(segments.length * 0.1);
+  for (let made = 0, t = 0; made < want && t < want * 50; t++) {
+    const x = rng.int(cols);
+    const y = rng.int(rows);
+    const a = segAt[x + y * cols]!;
+    if (a < 0 || !free(x + y * cols)) continue;
+    const dir = rng.next() < 0.5 ? -1 : 1;
+    for (let yy = y + dir; yy >= 0 && yy < rows; yy += dir) {
+      const h = x + yy * cols;
+      if (!free(h)) break;
+      const b = segAt[h]!;
+      // Land on the first strip with leads now and then; else pass over it.
+      if (b < 0 || rng.next() < 0.4) continue;
+      if (find(a) !== find(b)) {
+        parent[find(a)] = find(b);
+        for (let k = Math.min(y, yy); k <= Math.max(y, yy); k++) used[x + k * cols] = 1;
+        made++;
+      }
+      break;
+    }
   }
   const nets = new Map<number, string>();
   for (const p of parts) p.nets = {};

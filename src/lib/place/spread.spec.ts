@@ -26,7 +26,7 @@ describe('spreadLanes', () => {
         const problem = buildProblem(inst.design, { padsEdge: 'left' });
         const before = stateAt(problem, inst.board, inst.spots);
         const nets = picks.map((k) => k % problem.nets.length);
-        const wide = spreadLanes(before, inst.board, nets);
+        const wide = spreadLanes(before, inst.board, nets.map((net) => ({ net })));
         if (!wide) return;
         expect(wide.board.cols + wide.board.rows).toBeGreaterThan(inst.board.cols + inst.board.rows);
         const after = stateAt(problem, wide.board, wide.spots);
@@ -58,7 +58,7 @@ describe('spreadLanes', () => {
     let tried = 0;
     for (let n = 0; n < problem.nets.length && tried < 5; n++) {
       if (s.tally.segs[n]! < 2) continue;
-      const wide = spreadLanes(s, inst.board, [n]);
+      const wide = spreadLanes(s, inst.board, [{ net: n }]);
       if (!wide || wide.board.rows !== inst.board.rows) continue;
       tried++;
       expect(wide.board.cols).toBe(inst.board.cols + 1);
@@ -88,7 +88,7 @@ describe('spreadLanes', () => {
       const s = stateAt(problem, inst.board, inst.spots);
       for (let n = 0; n < problem.nets.length; n++) {
         if (s.tally.segs[n]! < 2) continue;
-        const wide = spreadLanes(s, inst.board, [n]);
+        const wide = spreadLanes(s, inst.board, [{ net: n }]);
         if (!wide || wide.board.rows === inst.board.rows) continue;
         found++;
         expect(wide.board.rows).toBe(inst.board.rows + 1);
@@ -112,6 +112,6 @@ describe('spreadLanes', () => {
     const problem = buildProblem(inst.design, { padsEdge: 'left' });
     const own: Board = { ...makeBoard('strip', inst.board.cols, inst.board.rows), conductors: [] };
     const s = stateAt(problem, inst.board, inst.spots);
-    expect(spreadLanes(s, own, [0])).toBeUndefined();
+    expect(spreadLanes(s, own, [{ net: 0 }])).toBeUndefined();
   });
 });

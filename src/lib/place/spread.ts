@@ -7,14 +7,15 @@
  * keeps its strip and its order along it: on a strip board the cuts and the segments to join
  * stay exactly what they were; each new column is a clear lane for links (on a pad board, a
  * clear lane for wires; on a breadboard pattern, a fresh bus column) and each new row a free
- * strip, a relay any net may borrow. For each net in `nets` (those the router could not
- * join) one column goes where both of two of its segments on different rows reach (strip
+ * strip, a relay any net may borrow. For each net in `failed` (those the router could not
+ * join, with their islands when the router named them) one column goes where both of two of its segments on different rows reach (strip
  * boards), or in the middle of its leads (other boards); on a strip board a net with no such
  * column gets a free row among (or beside) the rows of its leads instead. Undefined when nothing helps or
  * may be added (boards with their own copper other than the breadboard pattern keep their
  * size).
  */
 import type { Board } from '../model/layout.ts';
+import type { Problem } from '../model/problem.ts';
 import { breadboardBoard } from '../board/breadboard.ts';
 import { makeBoard } from '../board/grid.ts';
 import type { PlaceState, Spot } from './state.ts';
@@ -22,6 +23,8 @@ import type { PlaceState, Spot } from './state.ts';
 /** Widest and tallest a board may grow to (the same bounds as the working board's). */
 const MAX_COLS = 400;
 const MAX_ROWS = 400;
+/** Islands of up to this many leads get a column beside them whatever else is added. */
+const SMALL_ISLAND = 1;
 
 /** Boundaries b (between columns, or rows, b − 1 and b) that no body crosses. */
 function openBoundaries(s: PlaceState, rows: boolean): Uint8Array {
@@ -47,20 +50,31 @@ function nearestOpen(open: Uint8Array, at: number, lo: number, hi: number): numb
 /**
  * On a board whose strips run along the rows: an open boundary where a new column would
  * join two of the net's segments on different rows by a straight link (both reach it: their
- * leads or the gaps beside them), the nearest rows first; −1 when none.
+ * leads or the gaps beside them), the nearest rows first; −1 when none. With `islands`
+ * (lead holes per island, as the router left them), only segments of two different islands
+ * count: a lane between two pieces already joined helps nobody.
  */
-function laneBetweenSegments(s: PlaceState, open: Uint8Array, net: number): number {
+function laneBetweenSegments(s: PlaceState, open: Uint8Array, net: number, islands?: number[][]): number {
   const t = s.tally;
-  const segs: { row: number; lo: number; hi: number }[] = [];
+  const segs: { row: number; lo: number; hi: number; island: number }[] = [];
   const seen = new Set<number>();
-  for (const h of s.netHoles[net] ?? []) {
-    const c = s.map.cond[h]!;
-    if (seen.has(c)) continue;
-    seen.add(c);
-    const runs = t.runs[c]!;
-    const row = Math.floor(h / s.W);
-    for (let i = 0; i < runs.length; i++) if (runs[i] === net) segs.push({ row, lo: t.runLo[c]![i]!, hi: t.runHi[c]![i]! });
-  }
+  const groups = islands ?? [s.netHoles[net] ?? []];
+  groups.forEach((holes, k) => {
+    for (const h of holes) {
+      const c = s.map.cond[h]!;
+      const x = h % s.W;
+      const runs = t.runs[c]!;
+      const row = Math.floor(h / s.W);
+      for (let i = 0; i < runs.length; i++) {
+        if (runs[i] !== net || seen.has(c * s.W + i)) continue;
+        const lo = t.runLo[c]![i]!;
+        const hi = t.runHi[c]![i]!;
+        if (islands && (x < lo || x > hi)) continue;
+        seen.add(c * s.W + i);
+        segs.push({ row, lo, hi, island: islands ? k : i + c * s.W });
+      }
+    }
+  });
   let best = -1;
   let bestRows = Infinity;
   for (let i = 0; i < segs.length; i++)
@@ -68,7 +82,7 @@ function laneBetweenSegments(s: PlaceState, open: Uint8Array, net: number): numb
       const a = segs[i]!;
       const b = segs[j]!;
       const rows = Math.abs(a.row - b.row);
-      if (rows === 0 || rows >= bestRows) continue;
+      if (a.island === b.island || rows === 0 || rows >= bestRows) continue;
       const lo = Math.max(a.lo, b.lo);
       const hi = Math.min(a.hi, b.hi) + 1;
       if (lo > hi) continue;
@@ -110,7 +124,45 @@ function shiftAt(boundaries: number[], at: number): number {
   return k;
 }
 
-export function spreadLanes(s: PlaceState, board: Board, nets: number[]): { board: Board; spots: Spot[] } | undefined {
+/** A net the router could not join, with the lead holes of each of its islands when known. */
+export interface FailedNet {
+  net: number;
+  islands?: number[][];
+}
+
+/**
+ * The nets named by the router's `route.unroutable` problems, with the lead holes of each
+ * island it listed (`data.islands`, pins as "ref.pin"), in the placement `s`.
+ */
+export function failedNets(s: PlaceState, problems: Problem[]): FailedNet[] {
+  const parts = new Map(s.problem.parts.map((part, p) => [part.ref, p]));
+  const out = new Map<number, FailedNet>();
+  for (const pr of problems) {
+    for (const name of pr.nets ?? []) {
+      const net = s.problem.nets.findIndex((x) => x.name === name);
+      if (net < 0 || out.has(net)) continue;
+      const listed = (pr.data as { islands?: unknown } | undefined)?.islands;
+      const islands = Array.isArray(listed)
+        ? listed.map((group: unknown) =>
+            (Array.isArray(group) ? group : []).flatMap((pin: unknown) => {
+              const text = String(pin);
+              const dot = text.lastIndexOf('.');
+              const p = parts.get(text.slice(0, dot));
+              if (p === undefined) return [];
+              const i = s.problem.parts[p]!.pinNames.indexOf(text.slice(dot + 1));
+              const spot = s.spotOf(p);
+              const at = s.problem.parts[p]!.poses[spot.pose]!.pins[i];
+              return at ? [spot.x + at[0] + (spot.y + at[1]) * s.W] : [];
+            }),
+          )
+        : undefined;
+      out.set(net, islands && islands.filter((g) => g.length).length > 1 ? { net, islands } : { net });
+    }
+  }
+  return [...out.values()];
+}
+
+export function spreadLanes(s: PlaceState, board: Board, failed: FailedNet[]): { board: Board; spots: Spot[] } | undefined {
   const breadboard = board.pattern?.startsWith('breadboard') ?? false;
   if (board.conductors && !breadboard) return undefined;
   const box = s.bounds();
@@ -119,10 +171,20 @@ export function spreadLanes(s: PlaceState, board: Board, nets: number[]): { boar
   const openRows = openBoundaries(s, true);
   const colSet = new Set<number>();
   const rowSet = new Set<number>();
-  for (const n of nets) {
-    const lane = s.map.alongRows ? laneBetweenSegments(s, openCols, n) : nearestOpen(openCols, netMiddle(s, n), box.x0 + 1, box.x1);
+  for (const { net: n, islands } of failed) {
+    const lane = s.map.alongRows ? laneBetweenSegments(s, openCols, n, islands) : nearestOpen(openCols, netMiddle(s, n), box.x0 + 1, box.x1);
     if (lane >= 0) colSet.add(lane);
-    else if (s.map.alongRows && !breadboard) {
+    // No lane joins two islands: a column beside each island instead, room to land links and
+    // to cut relay islands out of the longer gaps. Small islands get one anyway: hemmed in by
+    // other nets' leads, they may have no free hole for any link to land in.
+    if (islands && s.map.alongRows)
+      for (const holes of islands) {
+        if (lane >= 0 && holes.length > SMALL_ISLAND) continue;
+        const xs = holes.map((h) => h % s.W);
+        const at = nearestOpen(openCols, xs.reduce((a, b) => a + b, 0) / xs.length, Math.max(0, Math.min(...xs) - 2), Math.min(s.W, Math.max(...xs) + 3));
+        if (at >= 0) colSet.add(at);
+      }
+    if (lane < 0 && s.map.alongRows && !breadboard) {
       const [lo, hi] = netRows(s, n);
       const row = nearestOpen(openRows, (lo + hi + 1) / 2, Math.max(0, lo), Math.min(s.H, hi + 1));
       if (row >= 0) rowSet.add(row);

@@ -17,8 +17,10 @@
  * by a minimum spanning tree of straight links (islands − 1 links of least length whenever
  * landing holes exist), and what is left by a maze search mixing links, wires, solder
  * bridges and free strips as relays; wires and links that stand in a net's way are ripped
- * up and routed again. Links land only in free holes outside part bodies, never cross each
- * other or a lead, and pass over bodies only when allowed.
+ * up and routed again. Only a net that cannot be joined so may take a stretch of another
+ * gap or strip end as a stepping stone, one more cut each (see route.ts). Links land only in
+ * free holes outside part bodies, never cross each other or a lead, and pass over bodies
+ * only when allowed.
  *
  * Failures are results: `route.unroutable` names the net, its islands and why (a drilled cut
  * between neighbouring leads, an island with no free hole, every way blocked); a placement

@@ -2,11 +2,12 @@
  * Links on the component side: where one may pass and land, and placing one.
  * - A link passes over holes free of leads and other links, and over part bodies only when
  *   the options allow; it ends in such a hole outside every body (the part would sit on it),
- *   on copper its net owns, nobody owns (with `unowned`), or a gap hole its side may claim.
+ *   on copper its net owns, nobody owns (with `unowned`), a gap hole its side may claim, or
+ *   (with `relays`) a gap hole inside a relay island it has or may start (claims.ts).
  * - Kept holes (reserve.ts) are advice, not law: the spanning tree keeps off them, the maze
  *   search pays to use them.
  */
-import { claimHole, claimOk, gapSide } from './claims.ts';
+import { claimHole, gapSegOf, gapSide } from './claims.ts';
 import { claimSegment, union, type RouteState } from './state.ts';
 
 /** Whether a link may pass over (or end in) this hole at all. */
@@ -16,20 +17,21 @@ export function linkClear(st: RouteState, h: number): boolean {
 
 /**
  * The segment a link end of `net` in hole `h` would join, or −1 when it may not land there.
- * `unowned` also allows free copper nobody owns yet (a free strip, an unused pad).
+ * `unowned` also allows free copper nobody owns yet (a free strip, an unused pad); `relays`
+ * (default: as `unowned`) a new relay island; `forced` ≥ 0 names the island it must join.
  */
-export function landingSeg(st: RouteState, h: number, net: number, unowned: boolean): number {
-  // A link end under a body is never right: the part would sit on it.
-  if (!linkClear(st, h) || st.body[h] !== 0) return -1;
+export function landingSeg(st: RouteState, h: number, net: number, unowned: boolean, relays = unowned, forced = -1): number {
+  // Its side and its islands are the net's copper; a new island needs `relays`.
   const s = st.cut.segOf[h]!;
-  if (s >= 0) {
-    const o = st.owner[s]!;
-    return o === net || (o === -1 && unowned) ? s : -1;
-  }
-  const g = st.cut.gapOf[h]!;
-  const side = gapSide(st, g, net);
-  if (side < 0 || !claimOk(st, g, st.copper.posOf[h]!, side)) return -1;
-  return side === 0 ? st.cut.gapLow[g]! : st.cut.gapHigh[g]!;
+  return landingOn(st, h, net, unowned, s >= 0 ? s : gapSegOf(st, h, net, forced, relays));
+}
+
+/** landingSeg for a hole whose segment for `net` is known: `seg` (see copperSegOf). */
+export function landingOn(st: RouteState, h: number, net: number, unowned: boolean, seg: number): number {
+  // A link end under a body is never right: the part would sit on it.
+  if (seg < 0 || !linkClear(st, h) || st.body[h] !== 0) return -1;
+  const o = st.owner[seg]!;
+  return o === net || (o === -1 && unowned) ? seg : -1;
 }
 
 /** Step between neighbouring holes from a towards b, or 0 when they share no row or column. */
@@ -42,20 +44,27 @@ export function lineStep(st: RouteState, a: number, b: number): number {
 
 /**
  * Place a straight link of `net` from a to b if every rule allows it right now; joins the
- * two segments and claims unowned copper when `unowned`. Returns whether it was placed.
+ * two segments and claims unowned copper (and relay islands) when `unowned`. `islands`
+ * (replay) names per hole the relay island a claim there must join. Returns whether it was
+ * placed.
  */
-export function placeLink(st: RouteState, a: number, b: number, net: number, unowned: boolean): boolean {
+export function placeLink(st: RouteState, a: number, b: number, net: number, unowned: boolean, islands?: Int32Array): boolean {
   if (a === b) return false;
   const step = lineStep(st, a, b);
   if (step === 0) return false;
   for (let h = a + step; h !== b; h += step) if (!linkClear(st, h)) return false;
   // Both ends checked before either claims: two ends in one gap are on one side (one net),
-  // and claims on one side that fit one by one fit together.
-  const sa = landingSeg(st, a, net, unowned);
-  const sb = landingSeg(st, b, net, unowned);
+  // and claims on one side that fit one by one fit together. A link between two holes of one
+  // gap that are no side's would join islands the copper already joins, or part them: never.
+  const g = st.cut.gapOf[a]!;
+  if (g >= 0 && g === st.cut.gapOf[b] && gapSide(st, g, net) < 0) return false;
+  const fa = islands ? islands[a]! : -1;
+  const fb = islands ? islands[b]! : -1;
+  const sa = landingSeg(st, a, net, unowned, unowned, fa);
+  const sb = landingSeg(st, b, net, unowned, unowned, fb);
   if (sa < 0 || sb < 0) return false;
-  claimHole(st, a, net);
-  claimHole(st, b, net);
+  claimHole(st, a, net, fa);
+  claimHole(st, b, net, fb);
   for (let h = a; ; h += step) {
     st.linkUse[h] = net + 1;
     if (h === b) break;

@@ -14,7 +14,7 @@
  * landing in a gap pays for the holes it takes from the other side when that side's net
  * still needs links (so one net does not starve its neighbour).
  */
-import { claimLoss, claimOk } from './claims.ts';
+import { claimLoss, claimOk, gapSide, sideSeg } from './claims.ts';
 import { placeLink } from './landing.ts';
 import { reserveScarce } from './reserve.ts';
 import { components, find, type RouteState } from './state.ts';
@@ -53,10 +53,11 @@ function sweep(st: RouteState, needs: Uint8Array): Edges {
   const lastRoot = new Int32Array(st.netCount);
   let run = 0;
   // What a landing takes from the other side of its gap, when that side still needs room.
+  const sideNet = (s: number): number => (s >= 0 ? st.owner[s]! : -1);
   const loss = (h: number, n: number): number => {
     const g = gapOf[h]!;
     if (g < 0) return 0;
-    const other = st.owner[st.owner[gapLow[g]!] === n ? gapHigh[g]! : gapLow[g]!]!;
+    const other = sideNet(sideNet(gapLow[g]!) === n ? gapHigh[g]! : gapLow[g]!);
     return other >= 0 && needs[other] ? claimLoss(st, h, n) : 0;
   };
   const visit = (h: number, n: number, s: number, len: (a: number, b: number) => number, vertical: boolean): void => {
@@ -95,8 +96,8 @@ function sweep(st: RouteState, needs: Uint8Array): Edges {
     const pos = st.copper.posOf[h]!;
     const lo = gapLow[g]!;
     const hi = gapHigh[g]!;
-    const nLo = st.owner[lo]!;
-    const nHi = st.owner[hi]!;
+    const nLo = sideNet(lo);
+    const nHi = sideNet(hi);
     if (nLo >= 0 && needs[nLo] && (kept < 0 || kept === nLo) && claimOk(st, g, pos, 0)) visit(h, nLo, lo, len, vertical);
     if (nHi >= 0 && needs[nHi] && (kept < 0 || kept === nHi) && claimOk(st, g, pos, 1)) visit(h, nHi, hi, len, vertical);
   };
@@ -134,7 +135,6 @@ function rootAt(st: RouteState, h: number, net: number): number {
   const s = st.cut.segOf[h]!;
   if (s >= 0) return st.owner[s] === net ? find(st, s) : -1;
   const g = st.cut.gapOf[h]!;
-  if (st.owner[st.cut.gapLow[g]!] === net) return find(st, st.cut.gapLow[g]!);
-  if (st.owner[st.cut.gapHigh[g]!] === net) return find(st, st.cut.gapHigh[g]!);
-  return -1;
+  const side = gapSide(st, g, net);
+  return side < 0 ? -1 : find(st, sideSeg(st, g, side));
 }

@@ -1,15 +1,16 @@
 /**
  * `connect(st, scratch, net, root, opts): boolean` — join the component `root` of `net` to
  * any other component of that net along the cheapest path search.ts finds, and build it:
- * wires, links, claims of gap holes and of free copper. When two steps of one path would
- * collide (a link over a link of the same path, claims that leave a gap no room for its
- * cut), the later landing is blocked and the search runs again, a few times at most.
+ * wires, links, claims of gap holes, of free copper and of relay islands. When two steps of
+ * one path would collide (a link over a link of the same path, claims that leave a gap no
+ * room for its cut), the later landing is blocked and the search runs again, a few times at
+ * most.
  *
  * `blockers(...)` and `linkBlockers(...)` run the search allowed to cross other nets'
  * copper-side wires, or other nets' links, at a price, and name the nets in the way (for
  * rip-up and re-route: wiring.ts, join.ts).
  */
-import { claimHole, claimOk, gapSide } from './claims.ts';
+import { LOW, claimHole, claimOk, gapSegOf, gapSide } from './claims.ts';
 import { lineStep, placeLink } from './landing.ts';
 import { COPPER, LINK, WIRE, foreignLink, search, type Scratch, type SearchOptions } from './search.ts';
 import { claimSegment, copperSegOf, union, type RouteState } from './state.ts';
@@ -27,10 +28,13 @@ function collision(st: RouteState, sc: Scratch, net: number, path: number[]): nu
     const g = st.cut.gapOf[h]!;
     if (g < 0) return true;
     const side = gapSide(st, g, net);
+    // Relay island claims of one path fit together when each fits alone: each keeps a cut's
+    // room from the other nets' claims, and those do not move while the path is built.
+    if (side < 0) return gapSegOf(st, h, net) >= 0;
     const c = claims.get(g) ?? [st.claimLo[g]!, st.claimHi[g]!];
     const pos = st.copper.posOf[h]!;
-    if (side < 0 || !claimOk(st, g, pos, side, c[0], c[1])) return false;
-    if (side === 0) c[0] = Math.max(c[0], pos);
+    if (!claimOk(st, g, pos, side, c[0], c[1])) return false;
+    if (side === LOW) c[0] = Math.max(c[0], pos);
     else c[1] = Math.min(c[1], pos);
     claims.set(g, c);
     return true;
@@ -102,11 +106,11 @@ export function blockers(st: RouteState, sc: Scratch, net: number, root: number)
 
 /**
  * Nets whose links stand in the way of joining `root` (of `net`) to the rest of its net,
- * found by a search whose links may pass over other links at a price; undefined when no
- * path exists even so.
+ * found by a search whose links may pass over other links at a price (and, with `relays`,
+ * start relay islands); undefined when no path exists even so.
  */
-export function linkBlockers(st: RouteState, sc: Scratch, net: number, root: number): number[] | undefined {
-  const path = search(st, sc, net, root, { wires: true, links: true, unowned: true, throughLinks: true });
+export function linkBlockers(st: RouteState, sc: Scratch, net: number, root: number, relays: boolean): number[] | undefined {
+  const path = search(st, sc, net, root, { wires: true, links: true, unowned: true, throughLinks: true, relays });
   if (!path) return undefined;
   const out: number[] = [];
   for (let i = 1; i < path.length; i++) {

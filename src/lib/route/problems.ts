@@ -54,7 +54,7 @@ export function unroutableProblem(st: RouteState, placed: Placed, net: number): 
     (groups.get(r) ?? groups.set(r, []).get(r)!).push(p);
   }
   const islands = [...groups.values()];
-  const stuck = [...groups.keys()].some((r) => !hasExit(st, net, r, false));
+  const stuck = [...groups.keys()].some((r) => !hasExit(st, net, r, false, true));
   const name = placed.netNames[net]!;
   const why = stuck
     ? 'an island has no free hole for a link to land in and no free neighbouring hole for a copper-side wire'
@@ -73,5 +73,20 @@ export function unroutableProblem(st: RouteState, placed: Placed, net: number): 
     holes: pins.map((p) => holeOf(st, p.hole)),
     pins: pins.map((p) => ({ ref: p.ref, pin: p.pin })),
     data: { reason: stuck ? 'no-landing-hole' : 'blocked', islands: islands.map((g) => g.map((p) => `${p.ref}.${p.pin}`)) },
+  };
+}
+
+/** An insulated wire link the router had to use: no straight link joins these islands. */
+export function insulatedProblem(st: RouteState, placed: Placed, a: number, b: number, net: number): Problem {
+  const name = placed.netNames[net]!;
+  return {
+    code: 'route.insulated-link',
+    severity: 'warning',
+    path: ['nets', name],
+    message: `net ${name} needs an insulated wire link from ${label(st, a)} to ${label(st, b)}: no straight link over free holes joins its islands`,
+    hint: 'use sleeved hook-up wire and keep it clear of hot or tall parts; or give the net room (move parts apart, enlarge the board) so a straight link fits',
+    nets: [name],
+    holes: [holeOf(st, a), holeOf(st, b)],
+    data: { reason: 'insulated-link' },
   };
 }

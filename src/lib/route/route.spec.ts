@@ -97,14 +97,23 @@ describe('routeLayout on strip boards', () => {
       { pin: '1', at: [0, 2] },
       { pin: '2', at: [4, 2] },
     ];
-    const blocked = routeLayout(c.design, c.placement);
+    // No link crosses the body (routeClean checks): A goes under it on the copper side,
+    // through a relay island cut out of the X–Y gap (two cuts in row 2 instead of one).
+    const under = routeClean(c, { cutStyle: 'hole' });
+    expect(under.layout.cuts.filter((cut) => 'at' in cut && cut.at[1] === 2)).toHaveLength(2);
+    expect(under.layout.wires.some((w) => w.from[0] === w.to[0] && Math.min(w.from[1], w.to[1]) < 2 && Math.max(w.from[1], w.to[1]) > 2)).toBe(true);
+    const over = routeClean(c, { cutStyle: 'hole', linksOverBodies: true });
+    expect([over.stats.links, over.stats.cuts]).toEqual([1, 1]);
+    // With X and Y three holes apart there is no room for a drilled island: blocked.
+    c.placement.board = makeBoard('strip', 4, 5);
+    c.placement.parts[2]!.pins[1]!.at = [3, 2];
+    const blocked = routeLayout(c.design, c.placement, { cutStyle: 'hole' });
     expect(blocked.ok).toBe(false);
     if (!blocked.ok) {
       expect(blocked.problems.map((p) => [p.code, p.nets])).toEqual([['route.unroutable', ['A']]]);
       expect(blocked.problems[0]!.data?.reason).toBe('blocked');
     }
-    const over = routeClean(c, { linksOverBodies: true });
-    expect(over.stats.links).toBe(1);
+    expect(routeClean(c, { cutStyle: 'hole', linksOverBodies: true }).stats.links).toBe(1);
   });
 
   it('uses a free strip as a relay when two islands share no free column', () => {

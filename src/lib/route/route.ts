@@ -1,11 +1,13 @@
 /**
  * `routeLayout(design, placement, options?)` — see index.ts for the API reference.
  *
- * Phases: read the placement (pins, nets, bodies) → split conductors into segments and gaps
- * (the cuts a placement forces) → copper-side wires for lone-hole islands, with rip-up
+ * Phases: read the placement (pins, nets, bodies) → split conductors into segments, gaps and
+ * tails (the cuts a placement forces) → copper-side wires for lone-hole islands, with rip-up
  * (wiring.ts) → links between strip islands by spanning tree (links.ts) → a maze search with
- * links, wires and free strips as relays for any net still in pieces, with rip-up (join.ts)
- * → place each cut inside what the links left of its gap (cuts.ts).
+ * links, wires and free strips as relays for any net still in pieces, with rip-up, and as a
+ * last resort relay islands: a run of holes inside a gap between two other nets, or in the
+ * tail of another net's strip, parted off by an extra cut (join.ts) → place each cut inside
+ * what the links left of its gap, two around a relay island (cuts.ts).
  * Every phase walks holes, segments and nets in index order, so the output depends on the
  * input only.
  */
@@ -15,9 +17,10 @@ import { buildCopper } from './copper.ts';
 import { placeCuts } from './cuts.ts';
 import { linkIslands } from './links.ts';
 import { joinRest } from './join.ts';
+import { insulatedLinks } from './insulated.ts';
 import { newScratch } from './search.ts';
 import { readPlacement } from './placement.ts';
-import { drilledCutProblem, unroutableProblem } from './problems.ts';
+import { drilledCutProblem, insulatedProblem, unroutableProblem } from './problems.ts';
 import { wireRuns } from './runs.ts';
 import { splitSegments } from './segments.ts';
 import { cloneState, newState } from './state.ts';
@@ -65,7 +68,7 @@ export function routeLayout(design: Design, placement: Layout, options?: RouteOp
   if (style === 'hole') {
     const cramped: Problem[] = [];
     for (let g = 0; g < cut.gapCount; g++)
-      if (cut.gapJ[g]! - cut.gapI[g]! < 2) {
+      if (cut.gapLow[g]! >= 0 && cut.gapHigh[g]! >= 0 && cut.gapJ[g]! - cut.gapI[g]! < 2) {
         const start = copper.value.condStart[cut.gapCond[g]!]!;
         cramped.push(drilledCutProblem(st, placed.value, copper.value.condHoles[start + cut.gapI[g]!]!, copper.value.condHoles[start + cut.gapJ[g]!]!));
       }
@@ -78,8 +81,12 @@ export function routeLayout(design: Design, placement: Layout, options?: RouteOp
   linkIslands(st);
   const joined = joinRest(base, st, scratch);
   st = joined.st;
-  const unroutable = joined.failed.map((n) => unroutableProblem(st, placed.value, n));
+  const straight = st.links.length;
+  const failed = parsed.data.insulatedLinks && joined.failed.length ? insulatedLinks(st, joined.failed) : joined.failed;
+  const unroutable = failed.map((n) => unroutableProblem(st, placed.value, n));
   if (unroutable.length) return fail(unroutable);
+  const warnings: Problem[] = [];
+  for (let i = straight; i < st.links.length; i += 3) warnings.push(insulatedProblem(st, placed.value, st.links[i]!, st.links[i + 1]!, st.links[i + 2]!));
 
   const { cols } = copper.value;
   const hole = (i: number): Hole => [i % cols, Math.floor(i / cols)];
@@ -115,5 +122,5 @@ export function routeLayout(design: Design, placement: Layout, options?: RouteOp
     wires: wires.length,
     wireLengthMm: round2(wires.reduce((t, w) => t + segmentLengthMm(w, pitch), 0)),
   };
-  return ok({ layout, stats });
+  return ok({ layout, stats }, warnings);
 }

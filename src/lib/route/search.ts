@@ -12,12 +12,21 @@
  * - component-side links between free holes in one row or column, cost 30 + 2 per hole,
  *   plus 60 for each hole kept by a scarce island of another net (reserve.ts) and, to find
  *   rip-up victims, 24 for each other net's wire or link crossed (`throughWires`,
- *   `throughLinks`). A hole's copper belongs to one net, so nets never touch.
+ *   `throughLinks`). A hole's copper belongs to one net, so nets never touch;
+ * - with `relays`, a new relay island: a link or wire lands inside a gap between two other
+ *   nets (or in the tail of another net's strip) with room for a cut on each side
+ *   (claims.ts), and the path travels on along that copper. It costs the builder a cut, so
+ *   it costs RELAY_CUT, more than any path without one: a path uses as few new relay islands
+ *   as it can, and none when it can do without. Islands the net already has are its copper.
+ *   Nearly every gap hole is a landing hole then, so a relay search walks links along each
+ *   clear stretch of a row or column once, from the cheapest state on it (a later one would
+ *   land only a few holes' cost cheaper, never with fewer islands).
  */
 import { MinHeap } from './heap.ts';
-import { claimLoss, claimOk, gapSide } from './claims.ts';
-import { landingSeg, linkClear } from './landing.ts';
-import { copperSegOf, find, isMulti, segmentHoles, type RouteState } from './state.ts';
+import { claimLoss, gapSegOf } from './claims.ts';
+import { stretchReach } from './islands.ts';
+import { landingOn, linkClear } from './landing.ts';
+import { find, isMulti, segmentHoles, type RouteState } from './state.ts';
 
 export interface SearchOptions {
   wires: boolean;
@@ -28,6 +37,8 @@ export interface SearchOptions {
   throughWires?: boolean;
   /** Allow links to pass over other nets' links at a price (to find rip-up victims). */
   throughLinks?: boolean;
+  /** Allow starting relay islands in other nets' gaps and tails (with `unowned`). */
+  relays?: boolean;
 }
 
 /** Costs in half-holes so that a bend weighs half a step. */
@@ -41,6 +52,8 @@ const BRIDGE = 40;
 const KEPT = 60;
 /** Price of crossing another net's wire or link when looking for what blocks a net. */
 const THROUGH = 24;
+/** Price of starting a relay island (one more cut): above the cost of any path without one. */
+const RELAY_CUT = 1 << 20;
 
 /** How a search reached a state (Scratch.kind). */
 export const START = 0;
@@ -57,9 +70,20 @@ export interface Scratch {
   kind: Uint8Array;
   spread: Int32Array;
   blocked: Uint8Array;
-  /** Per hole, for the net being searched: may a link pass (1), and the segment it lands on. */
+  /** Per hole: the search (epoch) that spread a new relay island's stretch from it. */
+  stretched: Int32Array;
+  /** Per hole: the search (epoch) that walked links along its row, its column (relay searches). */
+  walkedX: Int32Array;
+  walkedY: Int32Array;
+  /**
+   * Per hole, for the net being searched (searches with links): may a link pass (1), the
+   * segment it lands on, a gap hole's segment for the net, what a claim there takes from the
+   * other side (claimLoss).
+   */
   clear: Uint8Array;
   land: Int32Array;
+  gapSeg: Int32Array;
+  loss: Int32Array;
   epoch: number;
   heap: MinHeap;
 }
@@ -73,9 +97,14 @@ export function newScratch(st: RouteState): Scratch {
     prev: new Int32Array(n),
     kind: new Uint8Array(n),
     spread: new Int32Array(st.cut.segCount),
+    stretched: new Int32Array(st.copper.holes),
+    walkedX: new Int32Array(st.copper.holes),
+    walkedY: new Int32Array(st.copper.holes),
     blocked: new Uint8Array(st.copper.holes),
     clear: new Uint8Array(st.copper.holes),
     land: new Int32Array(st.copper.holes),
+    gapSeg: new Int32Array(st.copper.holes),
+    loss: new Int32Array(st.copper.holes),
     epoch: 0,
     heap: new MinHeap(),
   };
@@ -87,25 +116,25 @@ function onStrip(st: RouteState, h: number): boolean {
   return s < 0 || isMulti(st, s);
 }
 
-/** A wire may leave a pad, a copperless hole, or copper the net owns or may claim. */
-function wireFrom(st: RouteState, h: number, net: number, unowned: boolean): boolean {
+/**
+ * A wire may leave a pad, a copperless hole, or copper the net owns or may claim (`gs`: the
+ * segment a gap hole's copper is for the net, see gapSegOf).
+ */
+function wireFrom(st: RouteState, h: number, net: number, unowned: boolean, gs: number): boolean {
   const s = st.cut.segOf[h]!;
-  if (s < 0) return copperSegOf(st, h, net) >= 0;
+  if (s < 0) return gs >= 0;
   return !isMulti(st, s) || st.owner[s] === net || (unowned && st.owner[s] === -1);
 }
 
 /**
  * Whether a wire of `net` may enter hole h: 0 no, 1 yes, 2 only by crossing another net's
- * wire (with `through`). Pads and copperless holes nobody owns, the net's own copper, a gap
- * hole on the net's side with room left for its cut, and free strips when `unowned`.
+ * wire (with `through`), 3 by starting a relay island (with `relays`). Pads and copperless
+ * holes nobody owns, the net's own copper, a gap hole on the net's side (or its relay
+ * island's) with room left for the cuts, and free strips when `unowned`.
  */
-function wireInto(st: RouteState, h: number, net: number, opts: SearchOptions): number {
+function wireInto(st: RouteState, h: number, net: number, opts: SearchOptions, gs: number): number {
   const s = st.cut.segOf[h]!;
-  if (s < 0) {
-    const g = st.cut.gapOf[h]!;
-    const side = gapSide(st, g, net);
-    return side >= 0 && claimOk(st, g, st.copper.posOf[h]!, side) ? 1 : 0;
-  }
+  if (s < 0) return gs < 0 ? 0 : st.owner[gs] === net ? 1 : 3;
   const o = st.owner[s]!;
   if (o === net) return 1;
   if (isMulti(st, s)) return o === -1 && opts.unowned ? 1 : 0;
@@ -145,12 +174,27 @@ export function search(st: RouteState, sc: Scratch, net: number, root: number, o
     for (const h of holes) relax(h * 5 + 4, 0, -1, START);
   }
   if (guide && guide[0] > guide[1]) return undefined;
+  // Per gap hole, the segment its copper is for this net (a new relay island only with
+  // `relays`); tabled once per search when links walk the whole board, else asked each time.
+  const fresh = opts.relays === true && opts.unowned;
+  const { segOf, gapOf } = st.cut;
   if (opts.links)
     for (let h = 0; h < st.copper.holes; h++) {
+      const gap = gapOf[h]! >= 0;
+      const gs = gap ? gapSegOf(st, h, net, -1, fresh) : -1;
+      sc.gapSeg[h] = gs;
+      sc.loss[h] = gap ? claimLoss(st, h, net) : 0;
       sc.clear[h] = linkClear(st, h) ? 1 : 0;
-      sc.land[h] = sc.clear[h] && sc.blocked[h] === 0 ? landingSeg(st, h, net, opts.unowned) : -1;
+      sc.land[h] = sc.clear[h] && sc.blocked[h] === 0 ? landingOn(st, h, net, opts.unowned, gap ? gs : segOf[h]!) : -1;
     }
+  const gapSegAt = (h: number): number => (gapOf[h]! < 0 ? -1 : opts.links ? sc.gapSeg[h]! : gapSegOf(st, h, net, -1, fresh));
   const landable = (h: number): boolean => sc.land[h]! >= 0;
+  // With relay islands most gap holes are landing holes and a search that finds nothing
+  // walks every row and column from each of them; walk each clear run once per line instead.
+  const shortcut = opts.relays === true;
+  const runX: number[] = [];
+  const runY: number[] = [];
+  const whole = [1, 1];
   while (heap.size > 0) {
     const key = heap.peekCost();
     const state = heap.pop();
@@ -159,10 +203,23 @@ export function search(st: RouteState, sc: Scratch, net: number, root: number, o
     sc.done[state] = epoch;
     const h = (state / 5) | 0;
     const d = state % 5;
-    const cs = copperSegOf(st, h, net);
+    const cs = segOf[h]! >= 0 ? segOf[h]! : gapSegAt(h);
     if (cs >= 0 && st.owner[cs] === net && find(st, cs) !== root) return unwind(sc, state);
-    // Travel along copper the net owns or may claim.
-    if (cs >= 0 && isMulti(st, cs) && sc.spread[cs] !== epoch && (st.owner[cs] === net || (st.owner[cs] === -1 && opts.unowned))) {
+    // Travel along copper the net owns or may claim; along the free stretch a new relay
+    // island would take (its segment is only a name until claimed, so the stretch is marked
+    // by its holes: the first one popped spreads it at the least cost).
+    if (cs >= 0 && st.owner[cs] === -1 && st.cut.segGap[cs]! >= 0) {
+      if (sc.stretched[h] !== epoch) {
+        const g = st.cut.segGap[cs]!;
+        const [from, to] = stretchReach(st, g, st.copper.posOf[h]!);
+        const start = st.copper.condStart[st.cut.gapCond[g]!]!;
+        for (let p = from; p <= to; p++) {
+          const h2 = st.copper.condHoles[start + p]!;
+          sc.stretched[h2] = epoch;
+          relax(h2 * 5 + 4, cost, state, COPPER);
+        }
+      }
+    } else if (cs >= 0 && isMulti(st, cs) && sc.spread[cs] !== epoch && (st.owner[cs] === net || (st.owner[cs] === -1 && opts.unowned))) {
       sc.spread[cs] = epoch;
       holes.length = 0;
       segmentHoles(st, cs, holes);
@@ -170,23 +227,31 @@ export function search(st: RouteState, sc: Scratch, net: number, root: number, o
     }
     const x = h % cols;
     const y = (h - x) / cols;
-    if (opts.wires && wireFrom(st, h, net, opts.unowned)) {
+    if (opts.wires && wireFrom(st, h, net, opts.unowned, gapSegAt(h))) {
       for (let dir = 0; dir < 4; dir++) {
         const nx = dir === 0 ? x + 1 : dir === 2 ? x - 1 : x;
         const ny = dir === 1 ? y + 1 : dir === 3 ? y - 1 : y;
         if (nx < 0 || ny < 0 || nx >= cols || ny >= rows) continue;
         const h2 = nx + ny * cols;
-        const into = sc.blocked[h2] ? 0 : wireInto(st, h2, net, opts);
+        const into = sc.blocked[h2] ? 0 : wireInto(st, h2, net, opts, gapSegAt(h2));
         if (into === 0) continue;
         const bridge = onStrip(st, h) || onStrip(st, h2);
-        relax(h2 * 5 + dir, cost + WIRE_STEP + (d !== 4 && d !== dir ? BEND : 0) + (into === 2 ? THROUGH : 0) + (bridge ? BRIDGE : 0), state, WIRE);
+        relax(h2 * 5 + dir, cost + WIRE_STEP + (d !== 4 && d !== dir ? BEND : 0) + (into === 2 ? THROUGH : into === 3 ? RELAY_CUT : 0) + (bridge ? BRIDGE : 0), state, WIRE);
       }
     }
     if (opts.links && landable(h)) {
-      const leave = claimLoss(st, h, net);
+      const leave = sc.loss[h]!;
+      const fromGap = cs >= 0 ? st.cut.segGap[cs]! : -1;
+      // Per line (0: row, 1: column): walked already, walked whole, holes walked over.
+      const skipX = shortcut && sc.walkedX[h] === epoch;
+      const skipY = shortcut && sc.walkedY[h] === epoch;
+      whole[0] = whole[1] = 1;
+      runX.length = runY.length = 0;
       for (let dir = 0; dir < 4; dir++) {
+        if (dir % 2 === 0 ? skipX : skipY) continue;
         const dx = dir === 0 ? 1 : dir === 2 ? -1 : 0;
         const dy = dir === 1 ? 1 : dir === 3 ? -1 : 0;
+        const run = dir % 2 === 0 ? runX : runY;
         let crossed = 0;
         let kept = 0;
         let last = cs;
@@ -200,18 +265,33 @@ export function search(st: RouteState, sc: Scratch, net: number, root: number, o
             crossed++;
             continue;
           }
+          if (shortcut) run.push(h2);
           if (st.reserve[h2] !== -1 && st.reserve[h2] !== net) kept++;
           const s2 = sc.land[h2]!;
-          if (s2 < 0) continue;
+          if (s2 < 0 || (fromGap >= 0 && st.cut.segGap[s2] === fromGap)) continue;
           // Further holes of a piece of strip just landed on cost more for the same copper;
           // and a walk that meets its own strip again is done better from there.
           if (s2 === last && isMulti(st, s2)) {
-            if (s2 === cs && crossed === 0) break;
+            if (s2 === cs && crossed === 0) {
+              whole[dir % 2] = 0;
+              break;
+            }
             continue;
           }
           last = s2;
-          relax(h2 * 5 + 4, cost + LINK_BASE + LINK_PER_HOLE * k + claimLoss(st, h2, net) + leave + THROUGH * crossed + KEPT * kept, state, LINK);
+          const relay = st.cut.segGap[s2]! >= 0 && st.owner[s2] === -1 ? RELAY_CUT : 0;
+          relax(h2 * 5 + 4, cost + LINK_BASE + LINK_PER_HOLE * k + sc.loss[h2]! + leave + THROUGH * crossed + KEPT * kept + relay, state, LINK);
         }
+      }
+      // A whole line walked from the cheapest state on it: a later state there would walk it
+      // again only to land a few holes' cost cheaper, never with fewer relay islands.
+      if (shortcut && !skipX && whole[0]) {
+        sc.walkedX[h] = epoch;
+        for (const h2 of runX) sc.walkedX[h2] = epoch;
+      }
+      if (shortcut && !skipY && whole[1]) {
+        sc.walkedY[h] = epoch;
+        for (const h2 of runY) sc.walkedY[h2] = epoch;
       }
     }
   }

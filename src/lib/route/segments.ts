@@ -2,18 +2,30 @@
  * `splitSegments(copper, leadNet): Cutting` — the cut structure a placement forces.
  *
  * Along each conductor the pins are grouped into runs of one net. Each run becomes a
- * segment; between two runs of different nets lies a gap, the free holes between the last
- * lead of one run and the first lead of the next, where exactly one cut will go. That is
- * the minimum: neighbouring leads of different nets must be parted, and one cut parts them.
- * Where the cut goes inside its gap is left open until links have landed (a link may claim
- * a gap hole for either side), see claims.ts. Holes before the first lead and after the
- * last belong to the end segments; a conductor without leads is one unowned segment (a
- * free strip, usable as a relay). Every hole without copper, and every single-hole
- * conductor (a pad), is a segment of its own.
+ * segment, from its first lead to its last; between two runs of different nets lies a gap,
+ * the free holes between the last lead of one run and the first lead of the next, where one
+ * cut will go. That is the minimum: neighbouring leads of different nets must be parted, and
+ * one cut parts them. Where the cut goes inside its gap is left open until links have landed
+ * (a link may claim a gap hole for either side), see claims.ts.
+ *
+ * The holes before a conductor's first lead and after its last (its tails) are gaps too,
+ * with one side only (the other side, −1, is the strip's end): they carry the end segment's
+ * net and need no cut, unless another net takes a relay island there.
+ *
+ * Relay island: in the last routing phase a net that is neither side of a gap may claim a
+ * run of holes strictly inside it as a stepping stone, parted from its neighbours by a cut
+ * on each side (towards the strip's end of a tail, none). A gap may hold several, of one net
+ * or of several. Each gap hole has a relay segment of its own, appended after the ordinary
+ * segments (`segGap` ≥ 0, `holeRelay`): the island a claim starts there would be, owned by
+ * nobody at first (its position in `segFrom`/`segTo`).
+ *
+ * A conductor without leads is one unowned segment (a free strip, usable as a relay). Every
+ * hole without copper, and every single-hole conductor (a pad), is a segment of its own.
  */
 import type { Copper } from './copper.ts';
 
 export interface Cutting {
+  /** All segments: ordinary ones first, then one relay segment per gap hole. */
   segCount: number;
   /** Per segment: conductor (−1: a hole without copper), firm span as positions along it. */
   segCond: Int32Array;
@@ -26,12 +38,21 @@ export interface Cutting {
   segHighGap: Int32Array;
   /** Per segment: the net of its leads at the start (−1: no leads). */
   segNet: Int32Array;
+  /** Per segment: the gap a relay segment lies in, −1 for an ordinary segment. */
+  segGap: Int32Array;
+  /** Per hole: the relay segment of a gap hole (an island started there), else −1. */
+  holeRelay: Int32Array;
   /** Per hole: its segment when it firmly belongs to one, else −1 (a gap hole). */
   segOf: Int32Array;
   /** Per hole: its gap, else −1. */
   gapOf: Int32Array;
+  /** Gaps between leads and tails (gaps with one side). */
   gapCount: number;
-  /** Per gap: conductor, positions of the two leads it lies between, segments on each side. */
+  /**
+   * Per gap: conductor, positions of the two leads it lies between (a tail: −1 before the
+   * strip's start or the strip's length after its end), segments on each side (−1: the
+   * strip's end).
+   */
   gapCond: Int32Array;
   gapI: Int32Array;
   gapJ: Int32Array;
@@ -66,6 +87,19 @@ export function splitSegments(copper: Copper, leadNet: Int32Array): Cutting {
     sNet.push(net);
     return sCond.length - 1;
   };
+  /** A gap on conductor c between positions i and j (exclusive), sides lo and hi (−1: none). */
+  const addGap = (c: number, i: number, j: number, lo: number, hi: number): void => {
+    const g = gCond.length;
+    gCond.push(c);
+    gI.push(i);
+    gJ.push(j);
+    gLow.push(lo);
+    gHigh.push(hi);
+    if (lo >= 0) sHigh[lo] = g;
+    if (hi >= 0) sLow[hi] = g;
+    const start = condStart[c]!;
+    for (let p = i + 1; p < j; p++) gapOf[condHoles[start + p]!] = g;
+  };
 
   for (let c = 0; c < condLen.length; c++) {
     const start = condStart[c]!;
@@ -91,26 +125,29 @@ export function splitSegments(copper: Copper, leadNet: Int32Array): Cutting {
     }
     let prev = -1;
     runs.forEach(([net, first, last], k) => {
-      const from = k === 0 ? 0 : first;
-      const to = k === runs.length - 1 ? len - 1 : last;
-      const s = addSeg(c, from, to, -1, net);
-      for (let p = from; p <= to; p++) segOf[condHoles[start + p]!] = s;
-      if (prev >= 0) {
-        const g = gCond.length;
-        const i = runs[k - 1]![2];
-        gCond.push(c);
-        gI.push(i);
-        gJ.push(first);
-        gLow.push(prev);
-        gHigh.push(s);
-        sHigh[prev] = g;
-        sLow[s] = g;
-        for (let p = i + 1; p < first; p++) gapOf[condHoles[start + p]!] = g;
-      }
+      const s = addSeg(c, first, last, -1, net);
+      for (let p = first; p <= last; p++) segOf[condHoles[start + p]!] = s;
+      if (k === 0 && first > 0) addGap(c, -1, first, -1, s);
+      if (prev >= 0) addGap(c, runs[k - 1]![2], first, prev, s);
+      if (k === runs.length - 1 && last < len - 1) addGap(c, last, len, s, -1);
       prev = s;
     });
   }
   for (let h = 0; h < holes; h++) if (condOf[h] === -1) segOf[h] = addSeg(-1, 0, 0, h, leadNet[h]!);
+
+  // One relay segment per gap hole, after the ordinary segments, in hole order.
+  const ordinary = sCond.length;
+  const holeRelay = new Int32Array(holes).fill(-1);
+  const relayGap: number[] = [];
+  for (let h = 0; h < holes; h++) {
+    const g = gapOf[h]!;
+    if (g < 0) continue;
+    const p = copper.posOf[h]!;
+    holeRelay[h] = addSeg(gCond[g]!, p, p, -1, -1);
+    relayGap.push(g);
+  }
+  const segGap = new Int32Array(sCond.length).fill(-1);
+  segGap.set(relayGap, ordinary);
 
   return {
     segCount: sCond.length,
@@ -121,6 +158,8 @@ export function splitSegments(copper: Copper, leadNet: Int32Array): Cutting {
     segLowGap: Int32Array.from(sLow),
     segHighGap: Int32Array.from(sHigh),
     segNet: Int32Array.from(sNet),
+    segGap,
+    holeRelay,
     segOf,
     gapOf,
     gapCount: gCond.length,

@@ -2,9 +2,12 @@
  * The router's working state: flat typed arrays indexed by hole, segment and gap, changed
  * only through the functions of state.ts, claims.ts and landing.ts so the rules hold
  * everywhere. A segment's owner is the one net its copper carries (−1: nobody yet);
- * segments joined by links and copper-side wires are merged in a union-find.
+ * segments joined by links and copper-side wires are merged in a union-find. A relay island
+ * (segments.ts) is a segment like any other once a net owns it: in its net's union-find, a
+ * place for further landings and copper-side wires.
  */
-import { claimOk, gapSide } from './claims.ts';
+import { FAR, HIGH, LOW, claimOk, gapSegOf } from './claims.ts';
+import { islandReach } from './islands.ts';
 import type { Copper } from './copper.ts';
 import type { Placed } from './placement.ts';
 import type { Cutting } from './segments.ts';
@@ -33,9 +36,20 @@ export interface RouteState {
   reserve: Int32Array;
   owner: Int32Array;
   uf: Int32Array;
-  /** Per gap: the highest position claimed by the low side, the lowest by the high side. */
+  /**
+   * Per gap: the highest position claimed by the low side, the lowest by the high side (a
+   * missing side of a tail: ∓FAR), and the lowest and highest claim of its relay islands
+   * (none: FAR, −FAR).
+   */
   claimLo: Int32Array;
   claimHi: Int32Array;
+  relayLo: Int32Array;
+  relayHi: Int32Array;
+  /** Per hole: the relay island a claim there belongs to, else −1. */
+  claimSeg: Int32Array;
+  /** Per segment: a relay island's lowest and highest claim (none: FAR, −FAR). */
+  islandLo: Int32Array;
+  islandHi: Int32Array;
   /** Per net: the segments it owns (pins first, in hole order). */
   netSegs: number[][];
   /** Placed links and copper-side wire steps, as flat (hole, hole, net) triples. */
@@ -55,6 +69,15 @@ export function newState(copper: Copper, cut: Cutting, placed: Placed, cfg: Rout
       netSegs[owner[s]!]!.push(s);
     }
   }
+  const uf = new Int32Array(cut.segCount);
+  for (let s = 0; s < cut.segCount; s++) uf[s] = s;
+  // A missing side of a tail claims far beyond the strip's end (claims.ts).
+  const claimLo = cut.gapI.slice();
+  const claimHi = cut.gapJ.slice();
+  for (let g = 0; g < cut.gapCount; g++) {
+    if (cut.gapLow[g]! < 0) claimLo[g] = -FAR;
+    if (cut.gapHigh[g]! < 0) claimHi[g] = FAR;
+  }
   return {
     copper,
     cut,
@@ -67,9 +90,14 @@ export function newState(copper: Copper, cut: Cutting, placed: Placed, cfg: Rout
     pin: Uint8Array.from(placed.leadPin, (p) => (p >= 0 ? 1 : 0)),
     reserve: new Int32Array(copper.holes).fill(-1),
     owner,
-    uf: Int32Array.from({ length: cut.segCount }, (_, i) => i),
-    claimLo: Int32Array.from(cut.gapI),
-    claimHi: Int32Array.from(cut.gapJ),
+    uf,
+    claimLo,
+    claimHi,
+    relayLo: new Int32Array(cut.gapCount).fill(FAR),
+    relayHi: new Int32Array(cut.gapCount).fill(-FAR),
+    claimSeg: new Int32Array(copper.holes).fill(-1),
+    islandLo: new Int32Array(cut.segCount).fill(FAR),
+    islandHi: new Int32Array(cut.segCount).fill(-FAR),
     netSegs,
     links: [],
     wires: [],
@@ -86,6 +114,11 @@ export function cloneState(st: RouteState): RouteState {
     uf: st.uf.slice(),
     claimLo: st.claimLo.slice(),
     claimHi: st.claimHi.slice(),
+    relayLo: st.relayLo.slice(),
+    relayHi: st.relayHi.slice(),
+    claimSeg: st.claimSeg.slice(),
+    islandLo: st.islandLo.slice(),
+    islandHi: st.islandHi.slice(),
     netSegs: st.netSegs.map((l) => l.slice()),
     links: st.links.slice(),
     wires: st.wires.slice(),
@@ -130,16 +163,19 @@ export function claimSegment(st: RouteState, s: number, net: number): void {
   }
 }
 
-/** The segment whose copper hole h carries for `net` (a gap hole: the side of `net`), or −1. */
+/**
+ * The segment whose copper hole h carries for `net`: its own segment, or for a gap hole the
+ * side of `net` or the relay island a claim there would join (claims.ts), or −1.
+ */
 export function copperSegOf(st: RouteState, h: number, net: number): number {
   const s = st.cut.segOf[h]!;
-  if (s >= 0) return s;
-  const g = st.cut.gapOf[h]!;
-  const side = gapSide(st, g, net);
-  return side < 0 ? -1 : side === 0 ? st.cut.gapLow[g]! : st.cut.gapHigh[g]!;
+  return s >= 0 ? s : gapSegOf(st, h, net);
 }
 
-/** Holes of a segment a path may use: its firm holes and the gap holes it may still claim. */
+/**
+ * Holes of a segment a path may use: its firm holes and the gap holes it may still claim;
+ * for a relay segment, the reach of its island (never called for one that is no island).
+ */
 export function segmentHoles(st: RouteState, s: number, out: number[]): void {
   const { cut, copper } = st;
   if (!isMulti(st, s)) {
@@ -147,9 +183,15 @@ export function segmentHoles(st: RouteState, s: number, out: number[]): void {
     return;
   }
   const start = copper.condStart[cut.segCond[s]!]!;
+  if (cut.segGap[s]! >= 0) {
+    // A relay island: the holes it may reach.
+    const [from, to] = islandReach(st, s);
+    for (let p = from; p <= to; p++) out.push(copper.condHoles[start + p]!);
+    return;
+  }
   for (let p = cut.segFrom[s]!; p <= cut.segTo[s]!; p++) out.push(copper.condHoles[start + p]!);
   const lowGap = cut.segLowGap[s]!;
-  if (lowGap >= 0) for (let p = cut.gapI[lowGap]! + 1; p < cut.gapJ[lowGap]!; p++) if (claimOk(st, lowGap, p, 1)) out.push(copper.condHoles[start + p]!);
+  if (lowGap >= 0) for (let p = cut.gapI[lowGap]! + 1; p < cut.gapJ[lowGap]!; p++) if (claimOk(st, lowGap, p, HIGH)) out.push(copper.condHoles[start + p]!);
   const highGap = cut.segHighGap[s]!;
-  if (highGap >= 0) for (let p = cut.gapI[highGap]! + 1; p < cut.gapJ[highGap]!; p++) if (claimOk(st, highGap, p, 0)) out.push(copper.condHoles[start + p]!);
+  if (highGap >= 0) for (let p = cut.gapI[highGap]! + 1; p < cut.gapJ[highGap]!; p++) if (claimOk(st, highGap, p, LOW)) out.push(copper.condHoles[start + p]!);
 }

@@ -15,7 +15,8 @@
 import { hasExit } from './exits.ts';
 import { blockers, connect } from './maze.ts';
 import type { Scratch } from './search.ts';
-import { claimSegment, cloneState, components, find, isMulti, union, type RouteState } from './state.ts';
+import { replayWire } from './replay.ts';
+import { cloneState, components, find, isMulti, type RouteState } from './state.ts';
 
 const MAX_RIPS = 3;
 
@@ -78,17 +79,6 @@ function wireNet(st: RouteState, sc: Scratch, net: number): number {
 function withoutWires(base: RouteState, cur: RouteState, victims: number[]): RouteState {
   const next = cloneState(base);
   const w = cur.wires;
-  for (let i = 0; i < w.length; i += 3) {
-    const net = w[i + 2]!;
-    if (victims.includes(net)) continue;
-    const a = w[i]!;
-    const b = w[i + 1]!;
-    next.wires.push(a, b, net);
-    const sa = next.cut.segOf[a]!;
-    const sb = next.cut.segOf[b]!;
-    claimSegment(next, sa, net);
-    claimSegment(next, sb, net);
-    union(next, sa, sb);
-  }
+  for (let i = 0; i < w.length; i += 3) if (!victims.includes(w[i + 2]!)) replayWire(next, w[i]!, w[i + 1]!, w[i + 2]!);
   return next;
 }
