@@ -8,6 +8,12 @@ import { plantedInstance } from './planted.ts';
 import { buildProblem } from './problem.ts';
 import { scoreSpots } from './score.ts';
 import { circuitOf, designOf } from './test-kit.ts';
+import { PlaceState } from './state.ts';
+import { copperMap } from './copper-map.ts';
+import { circuitOfDesign } from './circuit-of-design.ts';
+import { placementLayout } from './output.ts';
+import { routeLayout } from '../route/index.ts';
+import { verifyLayout } from '../verify/index.ts';
 
 const CMP = { ...DEFAULT_WEIGHTS, stranded: 0, blocked: 0, shortfall: 0, supplyAtEdges: false };
 
@@ -38,6 +44,25 @@ describe('plantedInstance', () => {
     // every net is read off the copper, so the planted layout's nets need few links
     expect(cost!.links).toBeLessThanOrEqual(Math.ceil(inst.design.nets.length * 0.2));
     expect(plantedInstance(12, 3)).toEqual(inst);
+  });
+
+  it('plants a layout the router can finish: its straight links are real, so its spots route and verify clean', () => {
+    let routed = 0;
+    const seeds = [1, 2, 3, 4, 5, 6, 7, 8];
+    for (const seed of seeds) {
+      const inst = plantedInstance(40, seed);
+      const problem = buildProblem(inst.design, { padsEdge: 'left' });
+      const state = new PlaceState(problem, copperMap(inst.board));
+      inst.spots.forEach((spot, p) => state.place(p, spot));
+      state.settle();
+      const circuit = circuitOfDesign(inst.design);
+      const r = routeLayout(inst.design, placementLayout(state, inst.design, inst.board, new Set()));
+      if (!r.ok) continue;
+      routed++;
+      expect(verifyLayout(circuit, r.value.layout).faults).toEqual([]);
+    }
+    // The router is greedy: a planted answer exists, and it must find one nearly always.
+    expect(routed).toBeGreaterThanOrEqual(seeds.length - 1);
   });
 });
 
