@@ -4,6 +4,9 @@ import { CircuitSchema, type Circuit, type Layout } from '../model/index.ts';
 import { HEIGHT_CLASSES } from '../parts/footprint.ts';
 import { benchBufferLayout } from '../render/fixture.ts';
 import { buildGuide } from './build-guide.ts';
+import { linkList } from './segments.ts';
+import { buildOrder } from './build-order.ts';
+import type { Scene } from '../render/index.ts';
 
 function benchCircuit(): Circuit {
   return CircuitSchema.parse(JSON.parse(readFileSync(new URL('../../../layouts/bench-buffer.circuit.json', import.meta.url), 'utf8')));
@@ -52,6 +55,17 @@ describe('buildGuide', () => {
     // wire to cut = ⌈span + 5 mm each end to pass through and bend (segments.ts, common practice)⌉ = ⌈10.16 + 10⌉
     expect(g.links[0]!.cutMm).toBe(21);
     expect(g.wireStock.awg).toBe(22);
+  });
+
+  it('marks a link out of one row and column as an insulated wire, cut to its row-plus-column span', () => {
+    const l = benchBufferLayout();
+    const noNets = { links: [], wires: [] } as unknown as Scene;
+    expect(linkList(l, noNets).some((i) => i.insulated)).toBe(false);
+    const [bent] = linkList({ ...l, links: [{ from: [2, 2], to: [5, 6] }] }, noNets);
+    // 3 columns and 4 rows apart: 5 pitches straight across (12.7 mm), laid along the grid 7 pitches, plus 5 mm each end
+    expect(bent).toMatchObject({ lengthMm: 12.7, cutMm: Math.ceil(7 * 2.54 + 10), insulated: true });
+    const steps = buildOrder([], [bent!], []);
+    expect(steps.flatMap((s) => s.items).some((t) => t.includes('insulated wire'))).toBe(true);
   });
 
   it('marks resistors and capacitors by the IEC 60062 check values', () => {

@@ -26,7 +26,7 @@ export function buildOrder(placed: Placed[], links: SegmentItem[], wires: Segmen
     const h = p.fp?.height ?? 'offboard';
     (byClass.get(h) ?? byClass.set(h, []).get(h)!).push(p.lp.ref);
   }
-  byClass.set('link', links.map((l) => `${l.id} ${l.from.component}–${l.to.component}`));
+  byClass.set('link', links.map((l) => `${l.id} ${l.from.component}–${l.to.component}${l.insulated ? ' (insulated wire, sleeved)' : ''}`));
   const order: (HeightClass | 'wires')[] = [...HEIGHT_CLASSES.filter((h) => h !== 'offboard'), 'wires', 'offboard'];
   const steps: BuildStep[] = [];
   for (const stage of order) {

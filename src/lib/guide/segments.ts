@@ -2,6 +2,8 @@
  * Links (component side) and copper-side wires as bench lists: both end holes named from
  * both sides, the span in mm, and the length of wire to cut — the span plus
  * `LEAD_ALLOWANCE_MM` at each end to pass through the board and bend over (common practice).
+ * A link not in one row or column is an insulated wire (the router's last resort): marked,
+ * and cut to its row-plus-column span since it is laid along the grid.
  */
 import type { Layout, Segment } from '../model/layout.ts';
 import type { Hole } from '../model/problem.ts';
@@ -21,15 +23,20 @@ export function wireHolesOf(from: Hole, to: Hole): Hole[] {
 }
 
 function item(kind: 'link' | 'wire', s: Segment, i: number, layout: Layout, net: string | undefined, allowance: number): SegmentItem {
-  const span = Math.hypot(s.to[0] - s.from[0], s.to[1] - s.from[1]) * layout.board.pitchMm;
+  const [dx, dy] = [Math.abs(s.to[0] - s.from[0]), Math.abs(s.to[1] - s.from[1])];
+  const insulated = kind === 'link' && dx > 0 && dy > 0;
+  const span = Math.hypot(dx, dy) * layout.board.pitchMm;
+  // An insulated link is laid along the grid, not across it: cut it to the row-plus-column span.
+  const laid = insulated ? (dx + dy) * layout.board.pitchMm : span;
   const out: SegmentItem = {
     id: `${kind === 'link' ? 'L' : 'W'}${i + 1}`,
     from: holeName(s.from, layout.board.cols),
     to: holeName(s.to, layout.board.cols),
     lengthMm: Math.round(span * 100) / 100,
-    cutMm: Math.ceil(span + 2 * allowance),
+    cutMm: Math.ceil(laid + 2 * allowance),
   };
   if (net !== undefined) out.net = net;
+  if (insulated) out.insulated = true;
   return out;
 }
 

@@ -47,6 +47,8 @@ export interface SegmentItem {
   /** Length of wire to cut: the span plus a lead through each hole (common practice). */
   cutMm: number;
   net?: string;
+  /** A link that is not in one row or column: sleeved wire, laid along the grid (cut to the row-plus-column span). */
+  insulated?: true;
 }
 
 export interface PartGroup {
