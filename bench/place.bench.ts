@@ -159,18 +159,21 @@ function speedGroup(): void {
   console.log('\n(speed) normal effort on planted designs: placement alone, and the full plan (place + route + verify); cpu s against the goal');
   line(['parts', 'place cpu', 'plan wall', 'plan cpu', 'ratio', 'result', 'goal']);
   for (const n of [60, 300]) {
-    const inst = plantedInstance(n, 7);
-    const problem = buildProblem(inst.design, { padsEdge: 'left' });
-    const place = timed(() => placeOnBoard(problem, inst.board, { seed: 1, effort: 'normal', weights: DEFAULT_WEIGHTS, locked: new Map(), keepOut: [] }));
-    sample();
-    const goal = n === 60 ? 1 : 10;
-    const plan = timed(() => planLayout(inst.design, { effort: 'normal' }));
-    sample();
-    const r = plan.value;
-    const result = r.ok ? `${r.value.stats.cuts}c ${r.value.stats.links}l #${r.value.stats.attempts}` : 'no layout';
-    line([n, place.cpu.toFixed(2), plan.wall.toFixed(2), plan.cpu.toFixed(2), (plan.cpu / goal).toFixed(2), result, `< ${goal} s: ${verdict(r.ok && plan.cpu < goal)}`]);
+    for (const seed of [7, 11, 13]) {
+      const inst = plantedInstance(n, seed);
+      const problem = buildProblem(inst.design, { padsEdge: 'left' });
+      const place = timed(() => placeOnBoard(problem, inst.board, { seed: 1, effort: 'normal', weights: DEFAULT_WEIGHTS, locked: new Map(), keepOut: [] }));
+      sample();
+      const goal = n === 60 ? 1 : 10;
+      const plan = timed(() => planLayout(inst.design, { effort: 'normal' }));
+      sample();
+      const r = plan.value;
+      const insulated = r.warnings.filter((w) => w.code === 'route.insulated-link').length;
+      const result = r.ok ? `${r.value.stats.cuts}c ${r.value.stats.links}l ${insulated}i #${r.value.stats.attempts}` : 'no layout';
+      line([`${n} #${seed}`, place.cpu.toFixed(2), plan.wall.toFixed(2), plan.cpu.toFixed(2), (plan.cpu / goal).toFixed(2), result, `< ${goal} s: ${verdict(r.ok && plan.cpu < goal)}`]);
+    }
   }
-  console.log('    result: cuts (c), links (l) and the attempt that routed (#); ratio = plan cpu s / goal s');
+  console.log('    result: cuts (c), links (l) of which insulated wire links (i), and the attempt that routed (#); ratio = plan cpu s / goal s');
 }
 
 console.log(`kerfline bench:place (node ${process.version})`);

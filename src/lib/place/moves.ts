@@ -60,23 +60,24 @@ export function linePlaces(s: PlaceState): Int32Array {
   return at;
 }
 
+function put(m: MoveBuffer, k: number, p: number, x: number, y: number, pose: number): void {
+  m.parts[k] = p;
+  m.x[k] = x;
+  m.y[k] = y;
+  m.pose[k] = pose;
+}
+
 function one(m: MoveBuffer, p: number, x: number, y: number, pose: number): true {
   m.gate = false;
   m.n = 1;
-  m.parts[0] = p;
-  m.x[0] = x;
-  m.y[0] = y;
-  m.pose[0] = pose;
+  put(m, 0, p, x, y, pose);
   return true;
 }
 
 function two(m: MoveBuffer, p: number, px: number, py: number, pp: number, q: number, qx: number, qy: number, qp: number): true {
   one(m, p, px, py, pp);
   m.n = 2;
-  m.parts[1] = q;
-  m.x[1] = qx;
-  m.y[1] = qy;
-  m.pose[1] = qp;
+  put(m, 1, q, qx, qy, qp);
   return true;
 }
 
