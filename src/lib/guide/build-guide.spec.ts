@@ -66,6 +66,14 @@ describe('buildGuide', () => {
     expect(bent).toMatchObject({ lengthMm: 12.7, cutMm: Math.ceil(7 * 2.54 + 10), insulated: true });
     const steps = buildOrder([], [bent!], []);
     expect(steps.flatMap((s) => s.items).some((t) => t.includes('insulated wire'))).toBe(true);
+    // Straight but over a pin, or crossing another link: insulated too.
+    const pin = l.parts[0]!.pins[0]!.at;
+    const overPin = linkList({ ...l, links: [{ from: [pin[0], pin[1] - 1], to: [pin[0], pin[1] + 1] }] }, noNets);
+    expect(overPin[0]!.insulated).toBe(true);
+    const crossing = linkList({ ...l, links: [{ from: [20, 0], to: [20, 4] }, { from: [18, 2], to: [22, 2] }] }, noNets);
+    expect(crossing.map((i) => i.insulated ?? false)).toEqual([true, true]);
+    const apart = linkList({ ...l, links: [{ from: [20, 0], to: [20, 4] }, { from: [21, 0], to: [21, 4] }] }, noNets);
+    expect(apart.map((i) => i.insulated ?? false)).toEqual([false, false]);
   });
 
   it('marks resistors and capacitors by the IEC 60062 check values', () => {

@@ -2,8 +2,8 @@
  * Links (component side) and copper-side wires as bench lists: both end holes named from
  * both sides, the span in mm, and the length of wire to cut — the span plus
  * `LEAD_ALLOWANCE_MM` at each end to pass through the board and bend over (common practice).
- * A link not in one row or column is an insulated wire (the router's last resort): marked,
- * and cut to its row-plus-column span since it is laid along the grid.
+ * A link that is not straight, or crosses a pin or another link, is an insulated wire (the
+ * router's last resort): marked, and cut to its row-plus-column span (laid along the grid).
  */
 import type { Layout, Segment } from '../model/layout.ts';
 import type { Hole } from '../model/problem.ts';
@@ -22,9 +22,8 @@ export function wireHolesOf(from: Hole, to: Hole): Hole[] {
   return Array.from({ length: n + 1 }, (_, k) => [from[0] + k * dx, from[1] + k * dy] as Hole);
 }
 
-function item(kind: 'link' | 'wire', s: Segment, i: number, layout: Layout, net: string | undefined, allowance: number): SegmentItem {
+function item(kind: 'link' | 'wire', s: Segment, i: number, layout: Layout, net: string | undefined, allowance: number, insulated = false): SegmentItem {
   const [dx, dy] = [Math.abs(s.to[0] - s.from[0]), Math.abs(s.to[1] - s.from[1])];
-  const insulated = kind === 'link' && dx > 0 && dy > 0;
   const span = Math.hypot(dx, dy) * layout.board.pitchMm;
   // An insulated link is laid along the grid, not across it: cut it to the row-plus-column span.
   const laid = insulated ? (dx + dy) * layout.board.pitchMm : span;
@@ -40,9 +39,26 @@ function item(kind: 'link' | 'wire', s: Segment, i: number, layout: Layout, net:
   return out;
 }
 
+/**
+ * Which links must be insulated wire: a bare link is straight (one row or column) and passes
+ * over no pin and no other link; any other link (the router's last resort, or a hand-made
+ * one) would touch what it crosses.
+ */
+function insulatedLinks(layout: Layout): boolean[] {
+  const key = (h: Hole) => `${h[0]},${h[1]}`;
+  const pins = new Set(layout.parts.flatMap((p) => p.pins.map((q) => key(q.at))));
+  const covered = layout.links.map((l) => new Set(wireHolesOf(l.from, l.to).map(key)));
+  return layout.links.map((l, i) => {
+    if (l.from[0] !== l.to[0] && l.from[1] !== l.to[1]) return true;
+    const inner = wireHolesOf(l.from, l.to).slice(1, -1).map(key);
+    return inner.some((h) => pins.has(h)) || wireHolesOf(l.from, l.to).some((h) => covered.some((c, j) => j !== i && c.has(key(h))));
+  });
+}
+
 /** Nets are read off the scene, which joined the copper already. */
 export function linkList(layout: Layout, scene: Scene): SegmentItem[] {
-  return layout.links.map((l, i) => item('link', l, i, layout, scene.links[i]?.net, LEAD_ALLOWANCE_MM));
+  const insulated = insulatedLinks(layout);
+  return layout.links.map((l, i) => item('link', l, i, layout, scene.links[i]?.net, LEAD_ALLOWANCE_MM, insulated[i]));
 }
 
 /** Copper-side wires lie on the pads: only their ends are bent, so a smaller allowance. */

@@ -8,6 +8,9 @@
  * - `options.cutStyle`: 'hole' (drilled at a free hole), 'between' (scored between two
  *   holes) or 'either'; default: the board's `cutStyle`, else 'either'.
  *   `options.linksOverBodies`: links may pass over part bodies; default false.
+ *   `options.insulatedLinks`: a net nothing else joins gets an insulated wire link between
+ *   two of its islands (never in one row or column), each reported as a `route.insulated-link`
+ *   warning; default false.
  * - `stats`: { cuts, links, linkLengthMm, wires, wireLengthMm } (lengths: pitch × holes).
  *
  * Along each conductor, neighbouring leads of different nets get exactly one cut between

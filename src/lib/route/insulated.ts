@@ -1,15 +1,57 @@
 /**
- * `insulatedLinks(st, nets): number[]` — the last resort for nets still in pieces, used only
- * when the options allow it: an insulated wire link on the component side between the
- * nearest two free landing holes of two of the net's islands, in any direction. It lies over
- * whatever is between its ends (sleeved hook-up wire, common practice for a long hop), so it
- * blocks nothing but its two holes; the exchange contract joins a link's two ends only.
- * Nets in number order, nearest pair first (shortest wire), ties by hole index. Returns the
- * nets that stay in pieces (an island with no free landing hole at all).
+ * `insulatedLinks(base, st, scratch, nets): { st, left, links }` — the last resort for the
+ * nets joinRest left in pieces, used only when the options allow it: an insulated wire link
+ * on the component side between the nearest two free landing holes of two of the net's
+ * islands (row plus column distance), never in one row or column. It lies over whatever is
+ * between its ends (sleeved hook-up wire, common practice for a long hop), so it blocks
+ * nothing but its two holes; the exchange contract joins a link's two ends only. Its ends
+ * are in different rows and columns so that every reader tells it from a bare link by its
+ * geometry (the bench guide marks a link insulated when it is bent, or straight over a pin
+ * or another link, which no bare link of the router's is: guide/segments.ts).
+ *
+ * An island with no free landing hole because other nets' straight links pass over (or end
+ * in) its copper gets room: the state is rebuilt from `base` (the state before any link)
+ * without that net's links, the stuck net is joined (by the maze search from the freed
+ * island where it finds a way, else by insulated links), and the ripped net is joined again
+ * by the maze search (plain, then with relay islands) and insulated links for what is left.
+ * The rip-up is kept only when it joins an island of the stuck net and leaves the ripped
+ * net in no more pieces than before; at most TRIES nets per island, two tries each, and
+ * ROUNDS rip-ups per net, so it ends. Nets in number order, nearest pair first, ties by
+ * hole index. Returns the final state, the nets still in pieces (a subset of `nets`) and
+ * the insulated links as flat (hole, hole, net) triples in the order they were placed.
  */
-import { claimHole } from './claims.ts';
-import { landingSeg } from './landing.ts';
-import { claimSegment, components, find, segmentHoles, union, type RouteState } from './state.ts';
+import { landLink, landingSeg } from './landing.ts';
+import { connect } from './maze.ts';
+import { replay } from './replay.ts';
+import { reserveScarce } from './reserve.ts';
+import type { Scratch, SearchOptions } from './search.ts';
+import { components, find, segmentHoles, type RouteState } from './state.ts';
+
+/** Covering nets tried per stuck island, in hole order: each try replays the whole state. */
+const TRIES = 3;
+/** Rip-ups kept per net, each freeing one stuck island: bounds the work. */
+const ROUNDS = 3;
+const PLAIN: SearchOptions = { wires: true, links: true, unowned: true };
+const RELAYS: SearchOptions = { ...PLAIN, relays: true };
+
+export interface Insulated {
+  st: RouteState;
+  left: number[];
+  links: number[];
+}
+
+export function insulatedLinks(base: RouteState, start: RouteState, sc: Scratch, nets: number[]): Insulated {
+  let st = start;
+  let links: number[] = [];
+  for (const net of nets)
+    for (let round = 0; round < ROUNDS && !joinNet(st, net, links); round++) {
+      const freed = makeRoom(base, st, sc, net, links);
+      if (!freed) break;
+      [st, links] = freed;
+    }
+  // Whatever was tried, a net in pieces is reported: never a partial layout.
+  return { st, left: nets.filter((n) => components(st, n).length > 1), links };
+}
 
 /** Landing holes of one component of `net`: free holes on copper it owns or may claim on its side. */
 function landings(st: RouteState, net: number, root: number): number[] {
@@ -18,49 +60,122 @@ function landings(st: RouteState, net: number, root: number): number[] {
   return [...new Set(holes)].filter((h) => landingSeg(st, h, net, false, false) >= 0).sort((a, b) => a - b);
 }
 
-export function insulatedLinks(st: RouteState, nets: number[]): number[] {
+/** Join the components of `net` by insulated links while landing holes allow; whether it is whole. */
+function joinNet(st: RouteState, net: number, links: number[]): boolean {
   const { cols } = st.copper;
-  const left: number[] = [];
-  for (const net of nets) {
-    for (;;) {
-      const comps = components(st, net);
-      if (comps.length <= 1) break;
-      const mine = landings(st, net, comps[0]!);
-      let best: [number, number] | undefined;
-      let bestD = Infinity;
-      for (const other of comps.slice(1)) {
-        for (const b of landings(st, net, other)) {
-          const bx = b % cols;
-          const by = (b - bx) / cols;
-          for (const a of mine) {
-            const d = Math.abs((a % cols) - bx) + Math.abs(Math.floor(a / cols) - by);
-            // Two ends in one gap would need claims on one side that may not fit together.
-            if (d < bestD && (st.cut.gapOf[a]! < 0 || st.cut.gapOf[a] !== st.cut.gapOf[b])) {
-              bestD = d;
-              best = [a, b];
-            }
+  for (;;) {
+    const comps = components(st, net);
+    if (comps.length <= 1) return true;
+    const mine = landings(st, net, comps[0]!);
+    let best: [number, number] | undefined;
+    let bestD = Infinity;
+    for (const other of comps.slice(1)) {
+      for (const b of landings(st, net, other)) {
+        const bx = b % cols;
+        const by = (b - bx) / cols;
+        for (const a of mine) {
+          const ax = a % cols;
+          const ay = (a - ax) / cols;
+          const d = Math.abs(ax - bx) + Math.abs(ay - by);
+          // Two ends in one gap would need claims on one side that may not fit together.
+          if (d < bestD && ax !== bx && ay !== by && (st.cut.gapOf[a]! < 0 || st.cut.gapOf[a] !== st.cut.gapOf[b])) {
+            bestD = d;
+            best = [a, b];
           }
         }
       }
-      if (!best) {
-        left.push(net);
-        break;
+    }
+    if (!best) return false;
+    if (!placeInsulated(st, best[0], best[1], net)) throw new Error(`route: insulated link ${best[0]}→${best[1]} of net ${net} lost its landing`);
+    links.push(best[0], best[1], net);
+  }
+}
+
+/**
+ * Place an insulated link of `net` if both ends may land now (`islands`: per hole, the relay
+ * island a claim there must join, as in replay); whether it was placed. Its ends lie in two
+ * different gaps (or none), so their claims never meet.
+ */
+function placeInsulated(st: RouteState, a: number, b: number, net: number, islands?: Int32Array): boolean {
+  return landLink(st, a, b, net, false, islands, 0);
+}
+
+/**
+ * Rebuild `cur` from `base` without the links of `drop`: replay puts back the wires and the
+ * straight links, then the insulated ones go back by placeInsulated (a hole holds one lead,
+ * so a link's first end names it). Returns the state and the insulated links kept.
+ */
+function rebuild(base: RouteState, cur: RouteState, links: number[], drop: ReadonlySet<number>): [RouteState, number[]] {
+  const insulated = new Set<number>();
+  for (let i = 0; i < links.length; i += 3) insulated.add(links[i]!);
+  const straight: number[] = [];
+  for (let i = 0; i < cur.links.length; i += 3) if (!insulated.has(cur.links[i]!)) straight.push(cur.links[i]!, cur.links[i + 1]!, cur.links[i + 2]!);
+  const next = replay(base, { ...cur, links: straight }, drop);
+  const kept: number[] = [];
+  for (let i = 0; i < links.length; i += 3) {
+    const [a, b, net] = [links[i]!, links[i + 1]!, links[i + 2]!];
+    if (drop.has(net)) continue;
+    if (!placeInsulated(next, a, b, net, cur.claimSeg)) throw new Error(`route: replayed insulated link ${a}→${b} no longer fits`);
+    kept.push(a, b, net);
+  }
+  return [next, kept];
+}
+
+/**
+ * Other nets whose links pass over or end in a hole of component `root` of `net` that could
+ * otherwise take a link end (no pin, no body), in hole order.
+ */
+function coveringNets(st: RouteState, net: number, root: number): number[] {
+  const holes: number[] = [];
+  for (const s of st.netSegs[net]!) if (find(st, s) === root) segmentHoles(st, s, holes);
+  const out: number[] = [];
+  for (const h of [...new Set(holes)].sort((a, b) => a - b)) {
+    const v = st.linkUse[h]! - 1;
+    if (v >= 0 && v !== net && st.pin[h] === 0 && st.body[h] === 0 && !out.includes(v)) out.push(v);
+  }
+  return out;
+}
+
+/**
+ * Free an island of `net` with no landing hole by ripping up a net whose links cover it
+ * (see the module comment); the new state and insulated links, or undefined when no try
+ * joins that island.
+ */
+function makeRoom(base: RouteState, st: RouteState, sc: Scratch, net: number, links: number[]): [RouteState, number[]] | undefined {
+  const comps = components(st, net);
+  const stuck = comps.find((r) => landings(st, net, r).length === 0);
+  if (stuck === undefined) return undefined;
+  // Roots may change in a rebuild; a segment of the island names it across.
+  const seg = st.netSegs[net]!.find((s) => find(st, s) === stuck)!;
+  for (const v of coveringNets(st, net, stuck).slice(0, TRIES)) {
+    const had = components(st, v).length;
+    // First the maze search from the freed island (a straight link or wire beats an
+    // insulated one); if its path leaves the ripped net no way back, insulated links only.
+    for (const maze of [true, false]) {
+      const [next, kept] = rebuild(base, st, links, new Set([v]));
+      const root = find(next, seg);
+      if (landings(next, net, root).length === 0) break;
+      reserveScarce(next);
+      const mazed = maze && connect(next, sc, net, root, PLAIN);
+      joinNet(next, net, kept);
+      if (components(next, net).length < comps.length) {
+        rejoin(next, sc, v, kept);
+        if (components(next, v).length <= had) return [next, kept];
       }
-      const [a, b] = best;
-      const sa = landingSeg(st, a, net, false, false);
-      claimHole(st, a, net);
-      const sb = landingSeg(st, b, net, false, false);
-      if (sb < 0) throw new Error(`route: insulated link end ${b} of net ${net} lost its landing`);
-      claimHole(st, b, net);
-      st.linkUse[a] = net + 1;
-      st.linkUse[b] = net + 1;
-      st.leadNet[a] = net;
-      st.leadNet[b] = net;
-      claimSegment(st, sa, net);
-      claimSegment(st, sb, net);
-      union(st, sa, sb);
-      st.links.push(a, b, net);
+      if (!mazed) break; // this try was the insulated-only one already
     }
   }
-  return left;
+  return undefined;
+}
+
+/** Join a ripped net again: maze search as joinRest does (no further rip-up), then insulated links. */
+function rejoin(st: RouteState, sc: Scratch, net: number, links: number[]): void {
+  reserveScarce(st);
+  for (const opts of [PLAIN, RELAYS])
+    for (;;) {
+      const comps = components(st, net);
+      if (comps.length <= 1) return;
+      if (!connect(st, sc, net, comps[0]!, opts)) break;
+    }
+  joinNet(st, net, links);
 }

@@ -58,6 +58,15 @@ export function placeLink(st: RouteState, a: number, b: number, net: number, uno
   // gap that are no side's would join islands the copper already joins, or part them: never.
   const g = st.cut.gapOf[a]!;
   if (g >= 0 && g === st.cut.gapOf[b] && gapSide(st, g, net) < 0) return false;
+  return landLink(st, a, b, net, unowned, islands, step);
+}
+
+/**
+ * Land both ends of a link of `net` if both may land now, claim and join them; a straight
+ * link (`step` ≠ 0, see lineStep) lies over every hole between, an insulated one (`step` 0)
+ * only takes its two ends. Whether it was placed.
+ */
+export function landLink(st: RouteState, a: number, b: number, net: number, unowned: boolean, islands: Int32Array | undefined, step: number): boolean {
   const fa = islands ? islands[a]! : -1;
   const fb = islands ? islands[b]! : -1;
   const sa = landingSeg(st, a, net, unowned, unowned, fa);
@@ -65,10 +74,14 @@ export function placeLink(st: RouteState, a: number, b: number, net: number, uno
   if (sa < 0 || sb < 0) return false;
   claimHole(st, a, net, fa);
   claimHole(st, b, net, fb);
-  for (let h = a; ; h += step) {
-    st.linkUse[h] = net + 1;
-    if (h === b) break;
-  }
+  if (step === 0) {
+    st.linkUse[a] = net + 1;
+    st.linkUse[b] = net + 1;
+  } else
+    for (let h = a; ; h += step) {
+      st.linkUse[h] = net + 1;
+      if (h === b) break;
+    }
   st.leadNet[a] = net;
   st.leadNet[b] = net;
   claimSegment(st, sa, net);

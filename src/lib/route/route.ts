@@ -6,8 +6,10 @@
  * (wiring.ts) → links between strip islands by spanning tree (links.ts) → a maze search with
  * links, wires and free strips as relays for any net still in pieces, with rip-up, and as a
  * last resort relay islands: a run of holes inside a gap between two other nets, or in the
- * tail of another net's strip, parted off by an extra cut (join.ts) → place each cut inside
- * what the links left of its gap, two around a relay island (cuts.ts).
+ * tail of another net's strip, parted off by an extra cut (join.ts) → only with the
+ * `insulatedLinks` option, insulated wire links in any direction for nets still in pieces,
+ * ripping up other nets' links that cover an island's only landing holes (insulated.ts) →
+ * place each cut inside what the links left of its gap, two around a relay island (cuts.ts).
  * Every phase walks holes, segments and nets in index order, so the output depends on the
  * input only.
  */
@@ -81,12 +83,13 @@ export function routeLayout(design: Design, placement: Layout, options?: RouteOp
   linkIslands(st);
   const joined = joinRest(base, st, scratch);
   st = joined.st;
-  const straight = st.links.length;
-  const failed = parsed.data.insulatedLinks && joined.failed.length ? insulatedLinks(st, joined.failed) : joined.failed;
+  let failed = joined.failed;
+  let insulated: number[] = [];
+  if (parsed.data.insulatedLinks && failed.length) ({ st, left: failed, links: insulated } = insulatedLinks(base, st, scratch, failed));
   const unroutable = failed.map((n) => unroutableProblem(st, placed.value, n));
   if (unroutable.length) return fail(unroutable);
   const warnings: Problem[] = [];
-  for (let i = straight; i < st.links.length; i += 3) warnings.push(insulatedProblem(st, placed.value, st.links[i]!, st.links[i + 1]!, st.links[i + 2]!));
+  for (let i = 0; i < insulated.length; i += 3) warnings.push(insulatedProblem(st, placed.value, insulated[i]!, insulated[i + 1]!, insulated[i + 2]!));
 
   const { cols } = copper.value;
   const hole = (i: number): Hole => [i % cols, Math.floor(i / cols)];
