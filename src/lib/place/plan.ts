@@ -13,13 +13,14 @@
  *
  * Each attempt places on a working board (placeOnBoard; small designs get two or three
  * independent placements at normal or thorough effort, tried best first), crops an auto
- * board to the parts plus a margin of 1, then 2 holes and polishes the placement there (designs up
- * to 50 parts; bigger ones are only moved), routes (routeLayout) and verifies
- * (verifyLayout) from scratch. When the router names nets it could not join, the same
- * placement gets a free column where a straight link could join them, or a free strip near
- * them (spread.ts: cuts and links stay as they were), or else those nets weigh more and it is polished again — up to
- * ROUNDS routings, each cheap next to a fresh annealing. A failed attempt is retried on a
- * bigger board (auto) or with the next seed, with a looser area weight; when all fail the
+ * board to the parts plus a margin of 1, then 2 holes (designs of more than 50 parts: 1
+ * only) and polishes the placement there (designs up to 50 parts; bigger ones are only
+ * moved), routes (routeLayout) and verifies (verifyLayout) from scratch. When the router
+ * names nets it could not join, the same placement gets free columns or a free strip where
+ * they help those nets (spread.ts: cuts and links stay as they were), or else those nets
+ * weigh more and it is polished again — up to ROUNDS routings, each cheap next to a fresh
+ * annealing; late rounds may use insulated wire links (INSULATED_ROUND). A failed attempt
+ * is retried on a bigger board (auto) or with the next seed, with a looser area weight; when all fail the
  * result is `place.no-layout` with every reason. Normal and thorough effort first plan as
  * quick does, then carry on annealing from the quick placement for the rest of their steps
  * and keep the better layout (planScore), so they are never worse than quick for a seed;
@@ -78,7 +79,7 @@ export interface PlanContext {
 
 /** Attempts before giving up: boards grow (auto) or seeds change (fixed board). */
 const ATTEMPTS = { auto: 6, fixed: 3 };
-/** Margins tried round an auto board's parts when it is cropped to them. */
+/** Margins tried round an auto board's parts when it is cropped to them (bigger designs: the first only; their routing rounds spread the board anyway). */
 const MARGINS = [1, 2];
 /** Routing rounds per placement: after a failure the placement is spread by a free column or repaired. */
 const ROUNDS = 8;
@@ -265,7 +266,8 @@ function search(env: Env, effort: Effort, from?: Found['start']): Found | undefi
     }
     for (const placed of candidates) {
       if (env.stop()) break;
-      const frames = env.auto ? MARGINS.map((m) => cropBoard(board, placed.state.bounds()!, m)) : [{ board, dx: 0, dy: 0 }];
+      const margins = problem.parts.length > REPAIR_PARTS ? MARGINS.slice(0, 1) : MARGINS;
+      const frames = env.auto ? margins.map((m) => cropBoard(board, placed.state.bounds()!, m)) : [{ board, dx: 0, dy: 0 }];
       for (const frame of frames) {
         if (env.stop()) break;
         const polished = polishOnBoard(problem, placed, frame.board, frame, set, problem.parts.length <= POLISH_PARTS ? {} : { share: 0 });

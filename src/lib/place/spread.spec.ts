@@ -107,6 +107,40 @@ describe('spreadLanes', () => {
     expect(found).toBeGreaterThan(0);
   });
 
+  it('gives every lead of a few failed nets\' islands a free hole on each side where no body is in the way', () => {
+    const inst = plantedInstance(20, 5);
+    const problem = buildProblem(inst.design, { padsEdge: 'left' });
+    const s = stateAt(problem, inst.board, inst.spots);
+    const W = inst.board.cols;
+    const net = problem.nets.findIndex((_, n) => (s.netHoles[n] ?? []).length >= 2);
+    const holes = s.netHoles[net]!.slice();
+    const wide = spreadLanes(s, inst.board, [{ net, islands: holes.map((h) => [h]) }]);
+    expect(wide).toBeDefined();
+    const cols = wide!.board.cols;
+    // Each lead's new hole: its part moved by the columns inserted at or before its left edge.
+    const shift = (p: number) => wide!.spots[p]!.x - inst.spots[p]!.x;
+    const after = stateAt(problem, wide!.board, wide!.spots);
+    let sides = 0;
+    for (const h of holes) {
+      const p = s.owner[h]!;
+      const [x, y] = [h % W, Math.floor(h / W)];
+      const nx = x + shift(p);
+      const ny = y + (wide!.spots[p]!.y - inst.spots[p]!.y);
+      for (const side of [-1, 1]) {
+        const b = side < 0 ? x : x + 1;
+        const crossed = problem.parts.some((part, q) => {
+          const pose = part.poses[s.pose[q]!]!;
+          return s.x[q]! + pose.minX + 1 <= b && b <= s.x[q]! + pose.maxX;
+        });
+        if (crossed || b <= 0 || b >= W) continue;
+        sides++;
+        // The hole beside the lead is free: no lead, no body.
+        expect(after.owner[nx + side + ny * cols]).toBe(-1);
+      }
+    }
+    expect(sides).toBeGreaterThan(0);
+  });
+
   it('leaves boards with their own copper alone', () => {
     const inst = plantedInstance(6, 1);
     const problem = buildProblem(inst.design, { padsEdge: 'left' });

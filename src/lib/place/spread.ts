@@ -1,18 +1,23 @@
 /**
- * `spreadLanes(state, board, nets): { board, spots } | undefined` — make link room in a
+ * `spreadLanes(state, board, failed): { board, spots } | undefined` — make link room in a
  * finished placement without placing it again: insert free columns (and, on strip boards,
  * free rows) of holes between parts and shift everything beyond each by one hole.
+ * `failedNets(state, problems)` reads the nets (and their islands) from the router's
+ * `route.unroutable` problems.
  *
  * A column or row goes in only where no part's body crosses the boundary, so every lead
  * keeps its strip and its order along it: on a strip board the cuts and the segments to join
  * stay exactly what they were; each new column is a clear lane for links (on a pad board, a
  * clear lane for wires; on a breadboard pattern, a fresh bus column) and each new row a free
- * strip, a relay any net may borrow. For each net in `failed` (those the router could not
- * join, with their islands when the router named them) one column goes where both of two of its segments on different rows reach (strip
- * boards), or in the middle of its leads (other boards); on a strip board a net with no such
- * column gets a free row among (or beside) the rows of its leads instead. Undefined when nothing helps or
- * may be added (boards with their own copper other than the breadboard pattern keep their
- * size).
+ * strip, a relay any net may borrow. For each failed net one column goes where two of its
+ * segments on different rows (of different islands, when the router named them) both reach
+ * (strip boards), or in the middle of its leads (other boards). On a strip board a net with
+ * no such column gets a column beside each of its islands and a free row among (or beside)
+ * the rows of its leads; islands of a single lead get a column beside them anyway; and when
+ * no more than FEW nets failed, every lead of their islands gets a free column on each side
+ * where no body is in the way (a lead hemmed in by other nets' leads then has a free hole on
+ * its own copper). Undefined when nothing helps or may be added (boards with their own
+ * copper other than the breadboard pattern keep their size).
  */
 import type { Board } from '../model/layout.ts';
 import type { Problem } from '../model/problem.ts';
@@ -25,6 +30,8 @@ const MAX_COLS = 400;
 const MAX_ROWS = 400;
 /** Islands of up to this many leads get a column beside them whatever else is added. */
 const SMALL_ISLAND = 1;
+/** When no more nets than this failed, every lead of their islands gets a free column on each side it can. */
+const FEW = 3;
 
 /** Boundaries b (between columns, or rows, b − 1 and b) that no body crosses. */
 function openBoundaries(s: PlaceState, rows: boolean): Uint8Array {
@@ -171,6 +178,11 @@ export function spreadLanes(s: PlaceState, board: Board, failed: FailedNet[]): {
   const openRows = openBoundaries(s, true);
   const colSet = new Set<number>();
   const rowSet = new Set<number>();
+  // Few nets left: room on both sides of every lead of their islands.
+  if (failed.length <= FEW && s.map.alongRows)
+    for (const { islands } of failed)
+      for (const h of (islands ?? []).flat())
+        for (const b of [h % s.W, (h % s.W) + 1]) if (openCols[b]) colSet.add(b);
   for (const { net: n, islands } of failed) {
     const lane = s.map.alongRows ? laneBetweenSegments(s, openCols, n, islands) : nearestOpen(openCols, netMiddle(s, n), box.x0 + 1, box.x1);
     if (lane >= 0) colSet.add(lane);

@@ -79,9 +79,11 @@ describe('nearestPreferred and isPreferred', () => {
         const n = nearestPreferred(v, name);
         expect(n).toBeDefined();
         expect(isPreferred(n ?? NaN, name)).toBe(true);
-        // half the widest gap is under 0.6 of a nominal step 1/N decades (E6 4.7 → 6.8 is 0.96 step)
-        const steps = E_SERIES[name].length;
-        expect(Math.abs(Math.log10((n ?? NaN) / v))).toBeLessThanOrEqual(0.6 / steps);
+        // no further than half the widest gap between neighbours of the series, decade edge
+        // included (E24 13 → 15 is 1.49 nominal steps of 1/24 decade, so half of it is 0.75 step)
+        const sig = E_SERIES[name];
+        const widest = Math.max(...sig.map((a, i) => Math.log10((sig[i + 1] ?? sig[0]! * 10) / a)));
+        expect(Math.abs(Math.log10((n ?? NaN) / v))).toBeLessThanOrEqual(widest / 2 + 1e-12);
       }),
       { numRuns: 2000 },
     );
