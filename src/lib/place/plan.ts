@@ -186,21 +186,24 @@ function settingsFor(env: Env, board: Board, attempt: number, effort: Effort): B
 
 /**
  * Route a placement, verify it, and on a routing failure repair or spread it and try again
- * (ROUNDS in all). Spreading (free columns, spread.ts) needs a board that may grow: auto,
- * nothing locked, no keep-out areas.
+ * (ROUNDS in all; SHRINK_ROUNDS while `shrinking`, which never spreads nor uses insulated
+ * links). Spreading (free columns, spread.ts) needs a board that may grow: auto, nothing
+ * locked, no keep-out areas.
  */
-function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, attempt: number, steps: number, rounds = ROUNDS): { planned: Planned; warnings: Problem[] } | undefined {
+function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, attempt: number, steps: number, shrinking = false): { planned: Planned; warnings: Problem[] } | undefined {
   const { design, problem, opts } = env;
-  const canSpread = rounds === ROUNDS && env.auto && !env.locked.size && !opts.keepOut.length;
+  const big = problem.parts.length > REPAIR_PARTS;
+  const rounds = shrinking ? SHRINK_ROUNDS : ROUNDS;
+  const canSpread = !shrinking && env.auto && !env.locked.size && !opts.keepOut.length;
   let cur = first;
   let frame = board;
   let repaired = false;
   for (let round = 0; round < rounds; round++) {
     const routedDesign = designAfterSwaps(design, cur.state, problem.sections, cur.slotSections);
     const placement = placementLayout(cur.state, routedDesign, frame, new Set(env.locked.keys()));
-    env.progress('route', round / ROUNDS, cur.anneal.cost, cur.anneal.cost);
+    env.progress('route', round / rounds, cur.anneal.cost, cur.anneal.cost);
     // Insulated wire links only as a late resort, never while shrinking (see INSULATED_ROUND).
-    const insulated = rounds === ROUNDS && round >= (problem.parts.length > REPAIR_PARTS ? INSULATED_ROUND : ROUNDS - 1);
+    const insulated = !shrinking && round >= (big ? INSULATED_ROUND : rounds - 1);
     const routed = routeLayout(routedDesign, placement, { cutStyle: opts.cutStyle, linksOverBodies: opts.linksOverBodies, insulatedLinks: insulated });
     if (routed.ok) {
       env.progress('verify', 0, cur.anneal.cost, cur.anneal.cost);
@@ -313,7 +316,7 @@ function shrink(env: Env, effort: Effort, found: Found): Found {
         const set = { ...set0, seed: (set0.seed + k * 104729) % 2 ** 31, linkPlan: false };
         const placed = placeOnBoard(problem, board, set);
         if (!placed.ok) break;
-        const routed = routeRounds(env, placed, board, set, best.start.attempt, placed.anneal.steps, SHRINK_ROUNDS);
+        const routed = routeRounds(env, placed, board, set, best.start.attempt, placed.anneal.steps, true);
         if (!routed) continue;
         if (routed.planned.stats.holesUsed < best.planned.stats.holesUsed)
           better = { ...routed, score: planScore(routed.planned.stats, pitchMm), start: { placed, board, attempt: best.start.attempt } };
