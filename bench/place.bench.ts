@@ -45,7 +45,8 @@ const median = (a: number[]) => {
   return s.length % 2 ? s[(s.length - 1) / 2]! : (s[s.length / 2 - 1]! + s[s.length / 2]!) / 2;
 };
 const mb = (b: number) => `${(b / 2 ** 20).toFixed(0)} MB`;
-const line = (cells: (string | number)[]) => console.log(cells.map((c) => String(c).padEnd(14)).join(''));
+// Cells pad to 14 characters; a longer one still keeps a space before the next.
+const line = (cells: (string | number)[]) => console.log(cells.map((c) => `${String(c).padEnd(13)} `).join(''));
 const verdict = (okay: boolean) => (okay ? 'goal met' : 'goal NOT met');
 
 function design(parts: CircuitInput['parts']): Design {

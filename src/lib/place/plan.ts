@@ -227,7 +227,7 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
     // board that may not grow, once) weigh those nets more and polish the placement again.
     // Small designs are repaired first: a polish is cheap for them and keeps the board small.
     const repairFirst = !repaired && problem.parts.length <= REPAIR_PARTS;
-    const wide = canSpread && !repairFirst ? spreadLanes(cur.state, frame, problem.parts.length > REPAIR_PARTS ? failed : failed.map((f) => ({ net: f.net }))) : undefined;
+    const wide = canSpread && !repairFirst ? spreadLanes(cur.state, frame, big ? failed : failed.map((f) => ({ net: f.net }))) : undefined;
     const moved = wide && polishOnBoard(problem, cur, wide.board, wide.spots, set, { share: 0 });
     if (wide && moved?.ok) {
       cur = moved;
