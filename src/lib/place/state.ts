@@ -371,12 +371,19 @@ export class PlaceState {
     } else this.pinNet[p]![pin] = net;
   }
 
-  private addLead(hole: number, net: number): void {
+  /** Put a lead into (or take it out of) the copper tally, the hemmed-in count and the net's lists. */
+  private tallyLead(hole: number, net: number, add: boolean): void {
     if (this.map.padLike) this.boxedLeads -= this.boxedAround(hole);
-    this.tally.add(hole, net);
+    if (add) this.tally.add(hole, net);
+    else this.tally.remove(hole, net);
     if (this.map.padLike) this.boxedLeads += this.boxedAround(hole);
-    this.list(hole, net);
+    if (add) this.list(hole, net);
+    else this.unlist(hole, net);
     this.markNet(net);
+  }
+
+  private addLead(hole: number, net: number): void {
+    this.tallyLead(hole, net, true);
     const hx = hole % this.W;
     const hy = (hole - hx) / this.W;
     if (hx < this.boxX0[net]!) this.boxX0[net] = hx;
@@ -386,11 +393,7 @@ export class PlaceState {
   }
 
   private removeLead(hole: number, net: number): void {
-    if (this.map.padLike) this.boxedLeads -= this.boxedAround(hole);
-    this.tally.remove(hole, net);
-    if (this.map.padLike) this.boxedLeads += this.boxedAround(hole);
-    this.unlist(hole, net);
-    this.markNet(net);
+    this.tallyLead(hole, net, false);
     const hx = hole % this.W;
     const hy = (hole - hx) / this.W;
     if (hx === this.boxX0[net] || hx === this.boxX1[net] || hy === this.boxY0[net] || hy === this.boxY1[net]) this.boxStale[net] = 1;
