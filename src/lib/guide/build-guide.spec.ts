@@ -72,6 +72,11 @@ describe('buildGuide', () => {
     expect(overPin[0]!.insulated).toBe(true);
     const crossing = linkList({ ...l, links: [{ from: [20, 0], to: [20, 4] }, { from: [18, 2], to: [22, 2] }] }, noNets);
     expect(crossing.map((i) => i.insulated ?? false)).toEqual([true, true]);
+    // A bare link crossing an insulated one (over a pin) stays bare: the sleeve parts them.
+    // R1 has a pin at [7, 3]; no pin lies on row 2 from column 6 to 8.
+    expect(l.parts.flatMap((p) => p.pins.map((q) => q.at.join()))).toContain('7,3');
+    const sleeved = linkList({ ...l, links: [{ from: [7, 2], to: [7, 4] }, { from: [6, 2], to: [8, 2] }] }, noNets);
+    expect(sleeved.map((i) => i.insulated ?? false)).toEqual([true, false]);
     const apart = linkList({ ...l, links: [{ from: [20, 0], to: [20, 4] }, { from: [21, 0], to: [21, 4] }] }, noNets);
     expect(apart.map((i) => i.insulated ?? false)).toEqual([false, false]);
   });

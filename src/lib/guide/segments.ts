@@ -2,8 +2,9 @@
  * Links (component side) and copper-side wires as bench lists: both end holes named from
  * both sides, the span in mm, and the length of wire to cut — the span plus
  * `LEAD_ALLOWANCE_MM` at each end to pass through the board and bend over (common practice).
- * A link that is not straight, or crosses a pin or another link, is an insulated wire (the
- * router's last resort): marked, and cut to its row-plus-column span (laid along the grid).
+ * A link that is not straight, or crosses a pin, is an insulated wire (the router's last
+ * resort), as are two otherwise bare links that cross: marked, and cut to its row-plus-column
+ * span (laid along the grid).
  */
 import type { Layout, Segment } from '../model/layout.ts';
 import type { Hole } from '../model/problem.ts';
@@ -41,18 +42,16 @@ function item(kind: 'link' | 'wire', s: Segment, i: number, layout: Layout, net:
 
 /**
  * Which links must be insulated wire: a bare link is straight (one row or column) and passes
- * over no pin and no other link; any other link (the router's last resort, or a hand-made
- * one) would touch what it crosses.
+ * over no pin; a link that is bent or crosses a pin is insulated (the router's last resort,
+ * or a hand-made one). Two links that would be bare but cross or share a hole would touch:
+ * both are insulated. A bare link crossing an insulated one stays bare (the sleeve parts them).
  */
 function insulatedLinks(layout: Layout): boolean[] {
   const key = (h: Hole) => `${h[0]},${h[1]}`;
   const pins = new Set(layout.parts.flatMap((p) => p.pins.map((q) => key(q.at))));
+  const self = layout.links.map((l) => (l.from[0] !== l.to[0] && l.from[1] !== l.to[1]) || wireHolesOf(l.from, l.to).slice(1, -1).some((h) => pins.has(key(h))));
   const covered = layout.links.map((l) => new Set(wireHolesOf(l.from, l.to).map(key)));
-  return layout.links.map((l, i) => {
-    if (l.from[0] !== l.to[0] && l.from[1] !== l.to[1]) return true;
-    const inner = wireHolesOf(l.from, l.to).slice(1, -1).map(key);
-    return inner.some((h) => pins.has(h)) || wireHolesOf(l.from, l.to).some((h) => covered.some((c, j) => j !== i && c.has(key(h))));
-  });
+  return layout.links.map((l, i) => self[i]! || wireHolesOf(l.from, l.to).some((h) => covered.some((c, j) => j !== i && !self[j] && c.has(key(h)))));
 }
 
 /** Nets are read off the scene, which joined the copper already. */

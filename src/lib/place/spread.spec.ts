@@ -107,37 +107,57 @@ describe('spreadLanes', () => {
     expect(found).toBeGreaterThan(0);
   });
 
-  it('gives every lead of a few failed nets\' islands a free hole on each side where no body is in the way', () => {
-    const inst = plantedInstance(20, 5);
-    const problem = buildProblem(inst.design, { padsEdge: 'left' });
-    const s = stateAt(problem, inst.board, inst.spots);
-    const W = inst.board.cols;
-    const net = problem.nets.findIndex((_, n) => (s.netHoles[n] ?? []).length >= 2);
-    const holes = s.netHoles[net]!.slice();
-    const wide = spreadLanes(s, inst.board, [{ net, islands: holes.map((h) => [h]) }]);
-    expect(wide).toBeDefined();
-    const cols = wide!.board.cols;
-    // Each lead's new hole: its part moved by the columns inserted at or before its left edge.
-    const shift = (p: number) => wide!.spots[p]!.x - inst.spots[p]!.x;
-    const after = stateAt(problem, wide!.board, wide!.spots);
+  it('gives every lead of a few failed nets\' islands a new hole on its strip on each side, past a body if need be', () => {
     let sides = 0;
-    for (const h of holes) {
-      const p = s.owner[h]!;
-      const [x, y] = [h % W, Math.floor(h / W)];
-      const nx = x + shift(p);
-      const ny = y + (wide!.spots[p]!.y - inst.spots[p]!.y);
-      for (const side of [-1, 1]) {
-        const b = side < 0 ? x : x + 1;
-        const crossed = problem.parts.some((part, q) => {
-          const pose = part.poses[s.pose[q]!]!;
-          return s.x[q]! + pose.minX + 1 <= b && b <= s.x[q]! + pose.maxX;
-        });
-        if (crossed || b <= 0 || b >= W) continue;
-        sides++;
-        // The hole beside the lead is free: no lead, no body.
-        expect(after.owner[nx + side + ny * cols]).toBe(-1);
-      }
-    }
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 10_000 }), fc.nat(), (seed, pick) => {
+        const inst = plantedInstance(20, seed);
+        const problem = buildProblem(inst.design, { padsEdge: 'left' });
+        const s = stateAt(problem, inst.board, inst.spots);
+        const W = inst.board.cols;
+        const withLeads = problem.nets.map((_, n) => n).filter((n) => (s.netHoles[n] ?? []).length >= 2);
+        const net = withLeads[pick % withLeads.length]!;
+        const holes = s.netHoles[net]!.slice();
+        const leads = new Set(s.netHoles.flat());
+        const wide = spreadLanes(s, inst.board, [{ net, islands: holes.map((h) => [h]) }]);
+        if (!wide) return;
+        const cols = wide.board.cols;
+        const after = stateAt(problem, wide.board, wide.spots);
+        const afterLeads = new Set(after.netHoles.flat());
+        const open = (b: number) =>
+          b > 0 && b < W && !problem.parts.some((part, q) => {
+            const pose = part.poses[s.pose[q]!]!;
+            return s.x[q]! + pose.minX + 1 <= b && b <= s.x[q]! + pose.maxX;
+          });
+        for (const h of holes) {
+          const p = s.owner[h]!;
+          const [x, y] = [h % W, Math.floor(h / W)];
+          const nx = x + wide.spots[p]!.x - inst.spots[p]!.x;
+          const ny = y + wide.spots[p]!.y - inst.spots[p]!.y;
+          for (const side of [-1, 1]) {
+            // Boundaries from the lead outwards, up to the next lead on its strip or the edge.
+            let reachable = false;
+            for (let b = side < 0 ? x : x + 1; b > 0 && b < W; b += side) {
+              if (open(b)) {
+                reachable = true;
+                break;
+              }
+              if (leads.has(y * W + (side < 0 ? b - 1 : b))) break;
+            }
+            if (!reachable) continue;
+            sides++;
+            // After spreading, more holes between the lead and the next one (or the edge).
+            const gap = (at: number, row: number, width: number, set: Set<number>) => {
+              let n = 0;
+              for (let c = at + side; c >= 0 && c < width && !set.has(row * width + c); c += side) n++;
+              return n;
+            };
+            expect(gap(nx, ny, cols, afterLeads)).toBeGreaterThan(gap(x, y, W, leads));
+          }
+        }
+      }),
+      { numRuns: 40 },
+    );
     expect(sides).toBeGreaterThan(0);
   });
 

@@ -15,8 +15,9 @@
  * no such column gets a column beside each of its islands and a free row among (or beside)
  * the rows of its leads; islands of a single lead get a column beside them anyway; and when
  * no more than FEW nets failed, every lead of their islands gets a free column on each side
- * where no body is in the way (a lead hemmed in by other nets' leads then has a free hole on
- * its own copper). Undefined when nothing helps or may be added (boards with their own
+ * at the nearest boundary no body crosses before the next lead along its strip — past the
+ * body when one covers the holes beside the lead (a lead hemmed in by other nets' leads and
+ * bodies then has a free hole on its own copper). Undefined when nothing helps or may be added (boards with their own
  * copper other than the breadboard pattern keep their size).
  */
 import type { Board } from '../model/layout.ts';
@@ -30,7 +31,7 @@ const MAX_COLS = 400;
 const MAX_ROWS = 400;
 /** Islands of up to this many leads get a column beside them whatever else is added. */
 const SMALL_ISLAND = 1;
-/** When no more nets than this failed, every lead of their islands gets a free column on each side it can. */
+/** When no more nets than this failed, every lead of their islands gets a free column on each side it can (besideLead). */
 const FEW = 3;
 
 /** Boundaries b (between columns, or rows, b − 1 and b) that no body crosses. */
@@ -124,6 +125,22 @@ function netRows(s: PlaceState, net: number): [number, number] {
   return [y0, y1];
 }
 
+/**
+ * The open boundary nearest to the lead in column x of the row starting at hole `rowStart`,
+ * on the side `step` (−1 left, +1 right), with no lead between: where a body covers the holes
+ * next to the lead, past the body (a new column there still gives the lead's copper a free
+ * hole). −1 when another lead or the board's edge comes first.
+ */
+function besideLead(open: Uint8Array, leads: ReadonlySet<number>, rowStart: number, x: number, step: number, W: number): number {
+  for (let b = step < 0 ? x : x + 1; b >= 0 && b <= W; b += step) {
+    if (open[b]) return b;
+    // The hole the next boundary would put between the lead and the new column.
+    const next = step < 0 ? b - 1 : b;
+    if (next < 0 || next >= W || leads.has(rowStart + next)) return -1;
+  }
+  return -1;
+}
+
 /** How many of the sorted boundaries lie at or before `at`. */
 function shiftAt(boundaries: number[], at: number): number {
   let k = 0;
@@ -179,10 +196,17 @@ export function spreadLanes(s: PlaceState, board: Board, failed: FailedNet[]): {
   const colSet = new Set<number>();
   const rowSet = new Set<number>();
   // Few nets left: room on both sides of every lead of their islands.
-  if (failed.length <= FEW && s.map.alongRows)
+  if (failed.length <= FEW && s.map.alongRows) {
+    const leads = new Set(s.netHoles.flat());
     for (const { islands } of failed)
-      for (const h of (islands ?? []).flat())
-        for (const b of [h % s.W, (h % s.W) + 1]) if (openCols[b]) colSet.add(b);
+      for (const h of (islands ?? []).flat()) {
+        const x = h % s.W;
+        for (const step of [-1, 1]) {
+          const b = besideLead(openCols, leads, h - x, x, step, s.W);
+          if (b >= 0) colSet.add(b);
+        }
+      }
+  }
   for (const { net: n, islands } of failed) {
     const lane = s.map.alongRows ? laneBetweenSegments(s, openCols, n, islands) : nearestOpen(openCols, netMiddle(s, n), box.x0 + 1, box.x1);
     if (lane >= 0) colSet.add(lane);

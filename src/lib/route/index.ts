@@ -9,7 +9,7 @@
  *   holes) or 'either'; default: the board's `cutStyle`, else 'either'.
  *   `options.linksOverBodies`: links may pass over part bodies; default false.
  *   `options.insulatedLinks`: a net nothing else joins gets an insulated wire link between
- *   two of its islands (never in one row or column), each reported as a `route.insulated-link`
+ *   two of its islands (bent, or straight over a pin), each reported as a `route.insulated-link`
  *   warning; default false.
  * - `stats`: { cuts, links, linkLengthMm, wires, wireLengthMm } (lengths: pitch × holes).
  *

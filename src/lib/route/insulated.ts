@@ -2,30 +2,32 @@
  * `insulatedLinks(base, st, scratch, nets): { st, left, links }` — the last resort for the
  * nets joinRest left in pieces, used only when the options allow it: an insulated wire link
  * on the component side between the nearest two free landing holes of two of the net's
- * islands (row plus column distance), never in one row or column. It lies over whatever is
- * between its ends (sleeved hook-up wire, common practice for a long hop), so it blocks
- * nothing but its two holes; the exchange contract joins a link's two ends only. Its ends
- * are in different rows and columns so that every reader tells it from a bare link by its
- * geometry (the bench guide marks a link insulated when it is bent, or straight over a pin
- * or another link, which no bare link of the router's is: guide/segments.ts).
+ * islands (row plus column distance). It lies over whatever is between its ends (sleeved
+ * hook-up wire, common practice for a long hop), so it blocks nothing but its two holes; the
+ * exchange contract joins a link's two ends only. Every reader tells it from a bare link by
+ * its geometry: its ends are in different rows and columns, or, in one row or column, it
+ * passes over a pin (two islands of one strip with other nets' leads between them) — the
+ * bench guide marks a link insulated when it is bent or straight over a pin, which no bare
+ * link of the router's is (guide/segments.ts).
  *
  * An island with no free landing hole because other nets' straight links pass over (or end
- * in) its copper gets room: the state is rebuilt from `base` (the state before any link)
- * without that net's links, the stuck net is joined (by the maze search from the freed
+ * in) its copper or the gaps beside it gets room: the state is rebuilt from `base` (the
+ * state before any link) without that net's links, the stuck net is joined (by the maze search from the freed
  * island where it finds a way, else by insulated links), and the ripped net is joined again
  * by the maze search (plain, then with relay islands) and insulated links for what is left.
- * The rip-up is kept only when it joins an island of the stuck net and leaves the ripped
- * net in no more pieces than before; at most TRIES nets per island, two tries each, and
- * ROUNDS rip-ups per net, so it ends. Nets in number order, nearest pair first, ties by
+ * All hemmed islands of the net are freed at once (the k-th covering net of each). The
+ * rip-up is kept only when it joins an island of the stuck net and leaves every ripped net
+ * in no more pieces than before; at most TRIES sets of nets, two tries each, and ROUNDS
+ * rip-ups per net, so it ends. Nets in number order, nearest pair first, ties by
  * hole index. Returns the final state, the nets still in pieces (a subset of `nets`) and
  * the insulated links as flat (hole, hole, net) triples in the order they were placed.
  */
-import { landLink, landingSeg } from './landing.ts';
+import { landLink, landingSeg, lineStep } from './landing.ts';
 import { connect } from './maze.ts';
 import { replay } from './replay.ts';
 import { reserveScarce } from './reserve.ts';
 import type { Scratch, SearchOptions } from './search.ts';
-import { components, find, segmentHoles, type RouteState } from './state.ts';
+import { components, find, isMulti, segmentHoles, type RouteState } from './state.ts';
 
 /** Covering nets tried per stuck island, in hole order: each try replays the whole state. */
 const TRIES = 3;
@@ -78,7 +80,7 @@ function joinNet(st: RouteState, net: number, links: number[]): boolean {
           const ay = (a - ax) / cols;
           const d = Math.abs(ax - bx) + Math.abs(ay - by);
           // Two ends in one gap would need claims on one side that may not fit together.
-          if (d < bestD && ax !== bx && ay !== by && (st.cut.gapOf[a]! < 0 || st.cut.gapOf[a] !== st.cut.gapOf[b])) {
+          if (d < bestD && (st.cut.gapOf[a]! < 0 || st.cut.gapOf[a] !== st.cut.gapOf[b]) && ((ax !== bx && ay !== by) || overPin(st, a, b))) {
             bestD = d;
             best = [a, b];
           }
@@ -89,6 +91,13 @@ function joinNet(st: RouteState, net: number, links: number[]): boolean {
     if (!placeInsulated(st, best[0], best[1], net)) throw new Error(`route: insulated link ${best[0]}→${best[1]} of net ${net} lost its landing`);
     links.push(best[0], best[1], net);
   }
+}
+
+/** Whether the straight line from a to b (one row or column) passes over a pin between its ends. */
+function overPin(st: RouteState, a: number, b: number): boolean {
+  const step = lineStep(st, a, b);
+  for (let h = a + step; h !== b; h += step) if (st.pin[h]) return true;
+  return false;
 }
 
 /**
@@ -123,11 +132,16 @@ function rebuild(base: RouteState, cur: RouteState, links: number[], drop: Reado
 
 /**
  * Other nets whose links pass over or end in a hole of component `root` of `net` that could
- * otherwise take a link end (no pin, no body), in hole order.
+ * otherwise take a link end (no pin, no body), in hole order: the island's own holes and
+ * every hole of the gaps beside its segments, claimed or not (a neighbour's link end in the
+ * gap moves the cut towards the island and takes the hole it could have landed in).
  */
 function coveringNets(st: RouteState, net: number, root: number): number[] {
   const holes: number[] = [];
-  for (const s of st.netSegs[net]!) if (find(st, s) === root) segmentHoles(st, s, holes);
+  for (const s of st.netSegs[net]!) if (find(st, s) === root) {
+    segmentHoles(st, s, holes);
+    gapHoles(st, s, holes);
+  }
   const out: number[] = [];
   for (const h of [...new Set(holes)].sort((a, b) => a - b)) {
     const v = st.linkUse[h]! - 1;
@@ -136,31 +150,46 @@ function coveringNets(st: RouteState, net: number, root: number): number[] {
   return out;
 }
 
+/** Every hole of the gaps on either side of segment `s` (none for a relay island or a lone hole). */
+function gapHoles(st: RouteState, s: number, out: number[]): void {
+  const { cut, copper } = st;
+  if (!isMulti(st, s) || cut.segGap[s]! >= 0) return;
+  const start = copper.condStart[cut.segCond[s]!]!;
+  for (const g of [cut.segLowGap[s]!, cut.segHighGap[s]!]) if (g >= 0) for (let p = cut.gapI[g]! + 1; p < cut.gapJ[g]!; p++) out.push(copper.condHoles[start + p]!);
+}
+
 /**
- * Free an island of `net` with no landing hole by ripping up a net whose links cover it
- * (see the module comment); the new state and insulated links, or undefined when no try
- * joins that island.
+ * Free the islands of `net` with no landing hole by ripping up nets whose links cover them
+ * (see the module comment): the k-th covering net of each such island at once (both ends of
+ * a net may be hemmed in, and freeing one alone joins nothing). The new state and insulated
+ * links, or undefined when no try joins an island.
  */
 function makeRoom(base: RouteState, st: RouteState, sc: Scratch, net: number, links: number[]): [RouteState, number[]] | undefined {
   const comps = components(st, net);
-  const stuck = comps.find((r) => landings(st, net, r).length === 0);
-  if (stuck === undefined) return undefined;
-  // Roots may change in a rebuild; a segment of the island names it across.
-  const seg = st.netSegs[net]!.find((s) => find(st, s) === stuck)!;
-  for (const v of coveringNets(st, net, stuck).slice(0, TRIES)) {
-    const had = components(st, v).length;
-    // First the maze search from the freed island (a straight link or wire beats an
-    // insulated one); if its path leaves the ripped net no way back, insulated links only.
+  const stuck = comps.filter((r) => landings(st, net, r).length === 0);
+  // Roots may change in a rebuild; a segment of each island names it across.
+  const segs = stuck.map((r) => st.netSegs[net]!.find((s) => find(st, s) === r)!);
+  const covering = stuck.map((r) => coveringNets(st, net, r)).filter((c) => c.length);
+  if (!covering.length) return undefined;
+  const tried = new Set<string>();
+  for (let k = 0; k < TRIES; k++) {
+    const drop = [...new Set(covering.map((c) => c[Math.min(k, c.length - 1)]!))].sort((a, b) => a - b);
+    if (tried.has(drop.join())) continue;
+    tried.add(drop.join());
+    const had = drop.map((v) => components(st, v).length);
+    // First the maze search from the freed islands (a straight link or wire beats an
+    // insulated one); if its path leaves a ripped net no way back, insulated links only.
     for (const maze of [true, false]) {
-      const [next, kept] = rebuild(base, st, links, new Set([v]));
-      const root = find(next, seg);
-      if (landings(next, net, root).length === 0) break;
+      const [next, kept] = rebuild(base, st, links, new Set(drop));
+      const free = segs.filter((s) => landings(next, net, find(next, s)).length > 0);
+      if (!free.length) break;
       reserveScarce(next);
-      const mazed = maze && connect(next, sc, net, root, PLAIN);
+      let mazed = false;
+      if (maze) for (const s of free) if (components(next, net).length > 1 && connect(next, sc, net, find(next, s), PLAIN)) mazed = true;
       joinNet(next, net, kept);
       if (components(next, net).length < comps.length) {
-        rejoin(next, sc, v, kept);
-        if (components(next, v).length <= had) return [next, kept];
+        for (const v of drop) rejoin(next, sc, v, kept);
+        if (drop.every((v, i) => components(next, v).length <= had[i]!)) return [next, kept];
       }
       if (!mazed) break; // this try was the insulated-only one already
     }
