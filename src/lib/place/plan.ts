@@ -18,7 +18,9 @@
  * moved), routes (routeLayout) and verifies (verifyLayout) from scratch. When the router
  * names nets it could not join, the same placement gets free columns or a free strip where
  * they help those nets (spread.ts: cuts and links stay as they were), or else those nets
- * weigh more and it is polished again — up to ROUNDS routings, each cheap next to a fresh
+ * weigh more and it is polished again (also when, on a big design, the count of failed nets
+ * stops falling once insulated links are allowed: free columns no longer reach the last
+ * hemmed-in leads) — up to ROUNDS routings, each cheap next to a fresh
  * annealing; late rounds may use insulated wire links (INSULATED_ROUND). A failed attempt
  * is retried on a bigger board (auto) or with the next seed, with a looser area weight; when all fail the
  * result is `place.no-layout` with every reason. Normal and thorough effort first plan as
@@ -198,6 +200,7 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
   let cur = first;
   let frame = board;
   let repaired = false;
+  let before = Infinity;
   for (let round = 0; round < rounds; round++) {
     const routedDesign = designAfterSwaps(design, cur.state, problem.sections, cur.slotSections);
     const placement = placementLayout(cur.state, routedDesign, frame, new Set(env.locked.keys()));
@@ -226,7 +229,11 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
     // gave fewer cuts and links, 61 against 64 on four-mixer); else (or on a
     // board that may not grow, once) weigh those nets more and polish the placement again.
     // Small designs are repaired first: a polish is cheap for them and keeps the board small.
-    const repairFirst = !repaired && problem.parts.length <= REPAIR_PARTS;
+    // Big designs whose failures stopped falling once insulated links were allowed: the
+    // last nets are hemmed in where no free column can reach; move their parts instead.
+    const stalled = big && insulated && failed.length >= before;
+    before = failed.length;
+    const repairFirst = (!repaired && problem.parts.length <= REPAIR_PARTS) || stalled;
     const wide = canSpread && !repairFirst ? spreadLanes(cur.state, frame, big ? failed : failed.map((f) => ({ net: f.net }))) : undefined;
     const moved = wide && polishOnBoard(problem, cur, wide.board, wide.spots, set, { share: 0 });
     if (wide && moved?.ok) {

@@ -15,10 +15,11 @@
  * state before any link) without that net's links, the stuck net is joined (by the maze search from the freed
  * island where it finds a way, else by insulated links), and the ripped net is joined again
  * by the maze search (plain, then with relay islands) and insulated links for what is left.
- * All hemmed islands of the net are freed at once (the k-th covering net of each). The
- * rip-up is kept only when it joins an island of the stuck net and leaves every ripped net
- * in no more pieces than before; at most TRIES sets of nets, two tries each, and ROUNDS
- * rip-ups per net, so it ends. Nets in number order, nearest pair first, ties by
+ * All hemmed islands of the net are freed at once (the k-th covering net of each); a ripped
+ * net that is left hemmed in itself may rip up others in turn, once (DEPTH). The rip-up is
+ * kept only when it joins an island of the stuck net and leaves every ripped net in no more
+ * pieces than before; at most TRIES sets of nets, two tries each, and ROUNDS rip-ups per
+ * net, so it ends. Nets in number order, nearest pair first, ties by
  * hole index. Returns the final state, the nets still in pieces (a subset of `nets`) and
  * the insulated links as flat (hole, hole, net) triples in the order they were placed.
  */
@@ -31,6 +32,8 @@ import { components, find, isMulti, segmentHoles, type RouteState } from './stat
 
 /** Covering nets tried per stuck island, in hole order: each try replays the whole state. */
 const TRIES = 3;
+/** How deep a ripped net may rip up others in turn to get back together. */
+const DEPTH = 1;
 /** Rip-ups kept per net, each freeing one stuck island: bounds the work. */
 const ROUNDS = 3;
 const PLAIN: SearchOptions = { wires: true, links: true, unowned: true };
@@ -164,7 +167,7 @@ function gapHoles(st: RouteState, s: number, out: number[]): void {
  * a net may be hemmed in, and freeing one alone joins nothing). The new state and insulated
  * links, or undefined when no try joins an island.
  */
-function makeRoom(base: RouteState, st: RouteState, sc: Scratch, net: number, links: number[]): [RouteState, number[]] | undefined {
+function makeRoom(base: RouteState, st: RouteState, sc: Scratch, net: number, links: number[], depth = 0): [RouteState, number[]] | undefined {
   const comps = components(st, net);
   const stuck = comps.filter((r) => landings(st, net, r).length === 0);
   // Roots may change in a rebuild; a segment of each island names it across.
@@ -189,7 +192,13 @@ function makeRoom(base: RouteState, st: RouteState, sc: Scratch, net: number, li
       joinNet(next, net, kept);
       if (components(next, net).length < comps.length) {
         for (const v of drop) rejoin(next, sc, v, kept);
-        if (drop.every((v, i) => components(next, v).length <= had[i]!)) return [next, kept];
+        let done: [RouteState, number[]] | undefined = [next, kept];
+        // A ripped net left hemmed in may make room for itself in turn, once (DEPTH).
+        for (const v of drop) {
+          if (!done || depth >= DEPTH || components(done[0], v).length <= had[drop.indexOf(v)]!) continue;
+          done = makeRoom(base, done[0], sc, v, done[1], depth + 1);
+        }
+        if (done && components(done[0], net).length < comps.length && drop.every((v, i) => components(done[0], v).length <= had[i]!)) return done;
       }
       if (!mazed) break; // this try was the insulated-only one already
     }
