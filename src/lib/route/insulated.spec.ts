@@ -167,6 +167,32 @@ describe('room for an island whose landing holes other nets\' links cover', () =
   });
 });
 
+describe('room for hemmed-in islands in random crowded placements', () => {
+  // Random strip placements (randomCase: seed, board, parts, nets) that the router with
+  // insulated links still left in pieces before rip-ups looked at the gaps beside an
+  // island, freed every hemmed island of a net at once, and let a ripped net rip up others
+  // in turn. None of them is joined by a straight insulated link over a pin.
+  const cases = [
+    { seed: 216, cols: 5, rows: 7, parts: 10, nets: 3 },
+    { seed: 405, cols: 10, rows: 6, parts: 10, nets: 2 },
+    { seed: 554, cols: 7, rows: 7, parts: 5, nets: 6 },
+    { seed: 629, cols: 10, rows: 4, parts: 10, nets: 6 },
+    { seed: 871, cols: 12, rows: 4, parts: 7, nets: 3 },
+  ];
+  it.each(cases)('seed $seed on a $cols×$rows strip board: joined, clean, every insulated link bent', ({ seed, cols, rows, parts, nets }) => {
+    const c = randomCase(seed, makeBoard('strip', cols, rows), parts, nets);
+    const plain = routeLayout(c.design, c.placement, { cutStyle: 'between' });
+    expect(plain.ok).toBe(false);
+    const r = routeLayout(c.design, c.placement, INSULATED);
+    if (!r.ok) throw new Error(r.problems.map((p) => p.message).join('\n'));
+    expect(verifyLayout(c.circuit, r.value.layout).faults).toEqual([]);
+    expect(r.warnings.every((w) => w.code === 'route.insulated-link')).toBe(true);
+    const links = bent(r.value.layout);
+    expect(links).toHaveLength(r.warnings.length);
+    for (const l of links) expect(l.from[0] !== l.to[0] && l.from[1] !== l.to[1]).toBe(true);
+  });
+});
+
 describe('insulated links change nothing that routes without them', () => {
   const boards: fc.Arbitrary<Board> = fc.oneof(
     fc.record({ cols: fc.integer({ min: 5, max: 14 }), rows: fc.integer({ min: 4, max: 10 }) }).map(({ cols, rows }) => makeBoard('strip', cols, rows)),
