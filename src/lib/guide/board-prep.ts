@@ -6,7 +6,7 @@
 import type { Layout } from '../model/layout.ts';
 import type { Hole } from '../model/problem.ts';
 import { poseBody } from '../parts/footprint.ts';
-import { wireHolesOf } from './segments.ts';
+import { lineHoles } from '../render/index.ts';
 import { holeName, type Placed } from './placed.ts';
 import type { BoardPrep } from './types.ts';
 
@@ -31,7 +31,7 @@ export function boardPrep(layout: Layout, placed: Placed[]): BoardPrep {
     if (p.fp && p.pose) used.push(...poseBody(p.fp, p.pose));
   }
   for (const l of layout.links) used.push(l.from, l.to);
-  for (const w of layout.wires) used.push(...wireHolesOf(w.from, w.to));
+  for (const w of layout.wires) used.push(...lineHoles(w.from, w.to));
   for (const c of layout.cuts) used.push(...('at' in c ? [c.at] : c.between));
   const inside = used.filter((h) => h[0] >= 0 && h[1] >= 0 && h[0] < b.cols && h[1] < b.rows);
   const xs = inside.map((h) => h[0]);

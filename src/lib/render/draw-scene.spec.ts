@@ -5,6 +5,7 @@ import { CircuitSchema, type Layout } from '../model/index.ts';
 import { prepareDesign, type Design } from '../netlist/design.ts';
 import { drawScene } from './draw-scene.ts';
 import { benchBufferLayout } from './fixture.ts';
+import { sceneSvgMarkup } from './markup.ts';
 
 function benchDesign(): Design {
   const circuit = CircuitSchema.parse(JSON.parse(readFileSync(new URL('../../../layouts/bench-buffer.circuit.json', import.meta.url), 'utf8')));
@@ -128,6 +129,25 @@ describe('drawScene nets and marks on the bench-buffer layout', () => {
     expect(new Set(ids).size).toBe(ids.length);
     expect(JSON.parse(JSON.stringify(s))).toEqual(s);
     expect(drawScene(layout, design, { side: 'component', highlightNet: 'OUT' })).toEqual(s);
+  });
+});
+
+describe('drawScene insulated links', () => {
+  it('sleeves a bent link and a straight one over a pin on both sides, and leaves bare links bare', () => {
+    const l = benchBufferLayout();
+    // R1 has a pin at [7, 3] (benchBufferLayout); row 1 from column 10 to 12 holds no pin.
+    expect(l.parts.flatMap((p) => p.pins.map((q) => q.at.join()))).toContain('7,3');
+    const links = [
+      { from: [2, 2], to: [5, 6] },
+      { from: [7, 2], to: [7, 4] },
+      { from: [10, 1], to: [12, 1] },
+    ] as Layout['links'];
+    for (const side of ['component', 'copper'] as const) {
+      const s = drawScene({ ...l, links }, undefined, { side });
+      expect(s.links.map((k) => k.insulated ?? false)).toEqual([true, true, false]);
+      const svg = sceneSvgMarkup(s);
+      expect(svg.match(/data-insulated="true"/g)).toHaveLength(2);
+    }
   });
 });
 

@@ -3,8 +3,8 @@
  *
  * Builds the plain drawing data for one side of a layout: board outline, every hole, the
  * copper left after cuts (strip segments, bus-board groups, lone pads), cuts (drilled: a
- * ring at the hole; scored: a bar across the copper between two holes), links, copper-side
- * wires, parts (posed outlines with pin-1, "+" and cathode marks, ref and value), row
+ * ring at the hole; scored: a bar across the copper between two holes), links (those that
+ * must be insulated wire flagged, see insulated.ts, and drawn sleeved), copper-side wires, parts (posed outlines with pin-1, "+" and cathode marks, ref and value), row
  * letters and column numbers. `side: 'copper'` mirrors every x (x → width − x) and numbers
  * the columns as read from the copper side. Nets come from the design (pin → net) joined
  * through the copper, links and wires; without a design nothing carries a net.
@@ -18,6 +18,7 @@ import type { Design, DesignPart } from '../netlist/design.ts';
 import { connect } from './connectivity.ts';
 import { copperRuns, corners } from './copper.ts';
 import { makeFrame, round, type Frame } from './frame.ts';
+import { insulatedLinks } from './insulated.ts';
 import { poseShapes } from './part-shapes.ts';
 import { RULER_MARGIN, rulers } from './rulers.ts';
 import type { Scene, SceneCopper, SceneCut, SceneFault, SceneHole, ScenePart, SceneSegment, SceneSide, SceneText } from './scene.ts';
@@ -191,6 +192,7 @@ export function drawScene(layout: Layout, design: Design | undefined, opts: Draw
   });
 
   const m = RULER_MARGIN * frame.pitch;
+  const sleeved = insulatedLinks(layout);
   const scene: Scene = {
     side: opts.side,
     title: design?.title ?? '',
@@ -201,7 +203,7 @@ export function drawScene(layout: Layout, design: Design | undefined, opts: Draw
     holes,
     copper,
     cuts: layout.cuts.map((c, i) => cutItem(c, i, frame, faulty)),
-    links: layout.links.map(seg('link')),
+    links: layout.links.map(seg('link')).map((l, i) => (sleeved[i] ? { ...l, insulated: true } : l)),
     wires: layout.wires.map(seg('wire')),
     parts,
     rulers: rulers(frame),

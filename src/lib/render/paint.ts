@@ -75,12 +75,18 @@ function cutNode(c: SceneCut, scene: Scene, st: SideStyle, theme: Theme): SvgNod
   ], data);
 }
 
-function segmentNode(s: SceneSegment, colour: string, width: number, opacity: number, dash: string | undefined, endR: number): SvgNode {
+function segmentNode(s: SceneSegment, colour: string, width: number, opacity: number, dash: string | undefined, endR: number, sleeve?: { colour: string; width: number }): SvgNode {
   const line: SvgNode['attrs'] = { x1: s.x1, y1: s.y1, x2: s.x2, y2: s.y2, stroke: colour, 'stroke-width': width, 'stroke-linecap': 'round' };
   if (dash) line['stroke-dasharray'] = dash;
   const attrs: SvgNode['attrs'] = { 'data-id': s.id, opacity };
   if (s.net !== undefined) attrs['data-net'] = s.net;
-  return group(s.id.split(':')[0]!, [n('line', line), n('circle', { cx: s.x1, cy: s.y1, r: endR, fill: colour }), n('circle', { cx: s.x2, cy: s.y2, r: endR, fill: colour })], attrs);
+  const kids = [n('line', line), n('circle', { cx: s.x1, cy: s.y1, r: endR, fill: colour }), n('circle', { cx: s.x2, cy: s.y2, r: endR, fill: colour })];
+  // Insulated wire: the sleeve under the conductor.
+  if (s.insulated && sleeve) {
+    attrs['data-insulated'] = 'true';
+    kids.unshift(n('line', { x1: s.x1, y1: s.y1, x2: s.x2, y2: s.y2, stroke: sleeve.colour, 'stroke-width': sleeve.width, 'stroke-linecap': 'round' }));
+  }
+  return group(s.id.split(':')[0]!, kids, attrs);
 }
 
 function partNode(p: ScenePart, scene: Scene, st: SideStyle, theme: Theme): SvgNode {
@@ -114,7 +120,7 @@ export function paintScene(scene: Scene, theme: Theme = THEME): SvgNode {
     : group('joints', []);
   const cuts = group('cuts', scene.cuts.map((c) => cutNode(c, scene, st, theme)));
   const wires = group('wires', scene.wires.map((w) => segmentNode(w, st.wire, theme.stroke.wire, st.wireOpacity, st.wireDash, theme.stroke.wire * 0.8)));
-  const links = group('links', scene.links.map((l) => segmentNode(l, st.link, theme.stroke.link, st.linkOpacity, st.linkDash, theme.stroke.link * 0.8)));
+  const links = group('links', scene.links.map((l) => segmentNode(l, st.link, theme.stroke.link, st.linkOpacity, st.linkDash, theme.stroke.link * 0.8, { colour: st.sleeve, width: theme.stroke.sleeve })));
   const partsLayer = group('parts', scene.parts.map((p) => partNode(p, scene, st, theme)), { opacity: st.bodyOpacity });
   const rulers = group('rulers', scene.rulers.map((r) => text({ x: r.x, y: r.y, text: r.text, size: r.size, rotate: 0 }, st.ruler, theme.font, { 'data-id': r.id })));
 

@@ -75,6 +75,8 @@ export interface SceneSegment {
   sideLabel: string;
   net?: string;
   highlight: boolean;
+  /** A link that must be insulated wire (insulated.ts): drawn with a sleeve. */
+  insulated?: boolean;
 }
 
 export type SceneMark =

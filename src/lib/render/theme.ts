@@ -2,7 +2,8 @@
  * Kerfline's drawing colours and line weights, in one place. Our own palette: a pale
  * board, copper in a warm orange, cuts in slate blue, links in green, bare copper-side
  * wire in pewter, highlights in magenta and faults in red. Line weights are in board mm;
- * the link weight is about a 22 AWG wire (0.64 mm, check-values §11).
+ * the link weight is about a 22 AWG wire (0.64 mm, check-values §11); an insulated link
+ * gets a pale green sleeve about as wide as PVC hook-up wire of that gauge (1.6 mm, from memory).
  */
 export interface SideStyle {
   board: string;
@@ -19,6 +20,8 @@ export interface SideStyle {
   link: string;
   linkOpacity: number;
   linkDash?: string;
+  /** The sleeve drawn round an insulated link. */
+  sleeve: string;
   wire: string;
   wireOpacity: number;
   wireDash?: string;
@@ -38,7 +41,7 @@ export interface Theme {
   highlight: string;
   fault: string;
   font: string;
-  stroke: { edge: number; body: number; link: number; wire: number; cut: number; band: number; highlight: number; fault: number };
+  stroke: { edge: number; body: number; link: number; sleeve: number; wire: number; cut: number; band: number; highlight: number; fault: number };
 }
 
 export const THEME: Theme = {
@@ -55,6 +58,7 @@ export const THEME: Theme = {
     cut: '#35607f',
     link: '#2f7d4a',
     linkOpacity: 1,
+    sleeve: '#b8d8c0',
     wire: '#8d939c',
     wireOpacity: 0.5,
     wireDash: '0.8 0.6',
@@ -79,6 +83,7 @@ export const THEME: Theme = {
     link: '#2f7d4a',
     linkOpacity: 0.35,
     linkDash: '0.8 0.6',
+    sleeve: '#b8d8c0',
     wire: '#9aa0a8',
     wireOpacity: 1,
     bodyFill: 'none',
@@ -92,5 +97,5 @@ export const THEME: Theme = {
   highlight: '#d81b7a',
   fault: '#d32f2f',
   font: 'Helvetica, Arial, sans-serif',
-  stroke: { edge: 0.25, body: 0.2, link: 0.64, wire: 0.7, cut: 0.4, band: 0.35, highlight: 0.35, fault: 0.35 },
+  stroke: { edge: 0.25, body: 0.2, link: 0.64, sleeve: 1.6, wire: 0.7, cut: 0.4, band: 0.35, highlight: 0.35, fault: 0.35 },
 };

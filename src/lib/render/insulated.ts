@@ -1,0 +1,29 @@
+/**
+ * `insulatedLinks(layout): boolean[]` — which links of a layout must be insulated wire,
+ * read off the geometry alone (the exchange document has no flag for it): a bare link is
+ * straight (one row or column) and passes over no pin; a link that is bent or crosses a pin
+ * is insulated (the router's last resort, or a hand-made one). Two links that would be bare
+ * but cross or share a hole would touch: both are insulated. A bare link crossing an
+ * insulated one stays bare (the sleeve parts them). The drawing sleeves them and the bench
+ * guide lists them as such.
+ * `lineHoles(from, to)`: the holes a straight run passes over, ends included (both ends only
+ * when it is not straight).
+ */
+import type { Layout } from '../model/layout.ts';
+import type { Hole } from '../model/problem.ts';
+
+export function lineHoles(from: Hole, to: Hole): Hole[] {
+  if (from[0] !== to[0] && from[1] !== to[1]) return [from, to];
+  const n = Math.max(Math.abs(to[0] - from[0]), Math.abs(to[1] - from[1]));
+  const dx = Math.sign(to[0] - from[0]);
+  const dy = Math.sign(to[1] - from[1]);
+  return Array.from({ length: n + 1 }, (_, k) => [from[0] + k * dx, from[1] + k * dy] as Hole);
+}
+
+export function insulatedLinks(layout: Pick<Layout, 'parts' | 'links'>): boolean[] {
+  const key = (h: Hole) => `${h[0]},${h[1]}`;
+  const pins = new Set(layout.parts.flatMap((p) => p.pins.map((q) => key(q.at))));
+  const self = layout.links.map((l) => (l.from[0] !== l.to[0] && l.from[1] !== l.to[1]) || lineHoles(l.from, l.to).slice(1, -1).some((h) => pins.has(key(h))));
+  const covered = layout.links.map((l) => new Set(lineHoles(l.from, l.to).map(key)));
+  return layout.links.map((l, i) => self[i]! || lineHoles(l.from, l.to).some((h) => covered.some((c, j) => j !== i && !self[j] && c.has(key(h)))));
+}
