@@ -5,7 +5,8 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { CircuitSchema, LayoutSchema } from '../../lib/model/index.ts';
 import { verifyLayout } from '../../lib/verify/index.ts';
-import { layoutName, parseArgs, run } from './plan.ts';
+import { layoutName, linksLine, parseArgs, run } from './plan.ts';
+import { benchBufferLayout } from '../../lib/render/fixture.ts';
 
 const circuitFile = new URL('../../../layouts/bench-buffer.circuit.json', import.meta.url).pathname;
 const dir = mkdtempSync(join(tmpdir(), 'kerfline-plan-'));
@@ -39,6 +40,14 @@ describe('kerfline plan', () => {
     expect(verifyLayout(circuit, layout).clean).toBe(true);
     const svg = readFileSync(join(dir, 'bench-buffer.svg'), 'utf8');
     expect(svg.match(/data-side="(component|copper)"/g)?.length).toBeGreaterThanOrEqual(2);
+  });
+
+  it('says in the summary how many links must be insulated wire', () => {
+    const l = benchBufferLayout();
+    expect(linksLine(l, 12.5)).toBe(`links      ${l.links.length}, 12.5 mm in all`);
+    // One bent link (insulated) and one straight over no pin (bare); row 1 columns 10–12 hold no pin.
+    const two = { ...l, links: [{ from: [2, 2], to: [5, 6] }, { from: [10, 1], to: [12, 1] }] as typeof l.links };
+    expect(linksLine(two, 20)).toBe('links      2 (1 insulated wire), 20.0 mm in all');
   });
 
   it('exits 1 with the reason when no board of the asked size routes', async () => {

@@ -7,8 +7,9 @@
  * circuit as written, and writes DIR/<name>.layout.json (the exchange layout document,
  * with `meta` { program, seed, effort, attempt }) and DIR/<name>.svg (the component side
  * above the copper side, drawn by the renderer). <name> is the circuit file's name without
- * `.circuit.json` / its extension. Prints the board, cuts, links, link length, holes used
- * and time; shows a progress bar on stderr when stderr is a terminal.
+ * `.circuit.json` / its extension. Prints the board, cuts, links (and how many must be
+ * insulated wire), link length, holes used and time, and the plan's warnings (each insulated
+ * link) on stderr; shows a progress bar on stderr when stderr is a terminal.
  *
  * Defaults: --board auto, --seed 1, --effort normal.
  * Exit: 0 success, 1 no routable layout (with the reason), 2 bad input or usage.
@@ -18,7 +19,7 @@ import { parseBoardSpec } from '../../lib/board/index.ts';
 import type { Layout, PlanOptionsInput, Problem } from '../../lib/model/index.ts';
 import type { Design } from '../../lib/netlist/index.ts';
 import { planLayout, type PlanProgress } from '../../lib/place/index.ts';
-import { drawScene } from '../../lib/render/index.ts';
+import { drawScene, insulatedLinks } from '../../lib/render/index.ts';
 import { verifyLayout } from '../../lib/verify/index.ts';
 import { loadCircuit, printProblems, writeTextFile } from '../io.ts';
 import { sceneToSvgString } from '../svg-node.ts';
@@ -64,6 +65,12 @@ export function parseArgs(args: string[]): Args {
 }
 
 /** `twin-lfo.circuit.json` → `twin-lfo`; `deck.cir` → `deck`. */
+/** The summary's links line: how many, how many must be insulated wire, and their length. */
+export function linksLine(layout: Layout, lengthMm: number): string {
+  const insulated = insulatedLinks(layout).filter(Boolean).length;
+  return `links      ${layout.links.length}${insulated ? ` (${insulated} insulated wire)` : ''}, ${lengthMm.toFixed(1)} mm in all`;
+}
+
 export function layoutName(path: string): string {
   return basename(path).replace(/\.circuit\.json$/i, '').replace(/\.[^.]+$/, '') || 'layout';
 }
@@ -157,12 +164,14 @@ export async function run(args: string[], out: Out = process.stdout, err: Out = 
       return 2;
     }
   }
+  // Insulated wire links and other warnings: the builder should know before cutting wire.
+  printProblems(planned.warnings.filter((w) => w.severity === 'warning'), err, a.circuit);
   const b = stats.board;
   out.write(
     [
       `board      ${b.kind} ${b.cols} × ${b.rows} holes (${(b.cols * layout.board.pitchMm).toFixed(1)} × ${(b.rows * layout.board.pitchMm).toFixed(1)} mm)`,
       `cuts       ${stats.cuts}`,
-      `links      ${stats.links}, ${stats.linkLengthMm.toFixed(1)} mm in all`,
+      linksLine(layout, stats.linkLengthMm),
       ...(stats.wires ? [`wires      ${stats.wires}, ${stats.wireLengthMm.toFixed(1)} mm in all`] : []),
       `holes used ${stats.holesUsed}`,
       `time       ${seconds.toFixed(2)} s (seed ${a.seed}, effort ${a.effort}, attempt ${stats.attempts})`,
