@@ -53,6 +53,17 @@ export class PlaceState {
   readonly netBlocked: Int32Array;
   blockedSum = 0;
   /**
+   * Per net: the lanes its last verdict looked at, (x0, x1, y0, y1) for each pair of its
+   * segments on different rows that share columns (set by blockedPairs). A net whose leads
+   * did not change is judged again only when a moved body touches one of them. Two slots per
+   * net (entry 2·net + slot, `laneSlot[net]` the current one): a verdict writes the other
+   * slot and turns to it, settleBack turns back. `laneCount` of a slot is −1 while its lanes
+   * are unknown (never judged, or fewer than two segments): then the whole reach counts.
+   */
+  readonly laneRects: Int32Array[];
+  readonly laneCount: Int32Array;
+  readonly laneSlot: Uint8Array;
+  /**
    * Pad boards only: over all leads, 2 for one whose four neighbouring holes all hold leads
    * and 1/2 for one with a single free neighbour (congestion.ts), kept as leads come and go.
    */
@@ -82,6 +93,8 @@ export class PlaceState {
   private nDirtyNets = 0;
   /** Link-lane verdicts the last settle changed: net, old count, old reach lo, old reach hi (for settleBack). */
   private readonly laneLog: number[] = [];
+  /** Nets the last settle judged (their lane slots turn back when it is undone). */
+  private readonly laneJudged: number[] = [];
   private readonly netDirty: Uint8Array;
   /** Each net's lead box as its leads come and go (−1 / 1e9 when empty); stale after a lead on its edge left. */
   private readonly boxX0: Int32Array;
@@ -141,6 +154,9 @@ export class PlaceState {
     this.byLeft = new Int32Array(this.W * this.partWords);
     this.byTop = new Int32Array(this.H * this.partWords);
     this.netBlocked = new Int32Array(nets);
+    this.laneRects = Array.from({ length: 2 * nets }, () => new Int32Array(0));
+    this.laneCount = new Int32Array(2 * nets).fill(-1);
+    this.laneSlot = new Uint8Array(nets);
     this.rowCount = new Int32Array(this.H);
     this.colCount = new Int32Array(this.W);
     this.leadIdx = new Int32Array(this.W * this.H).fill(-1);
@@ -481,6 +497,7 @@ export class PlaceState {
   /** Bring cuts, links and per-net estimates up to date after moves. */
   settle(): void {
     if (this.laneLog.length) this.laneLog.length = 0;
+    if (this.laneJudged.length) this.laneJudged.length = 0;
     this.recount(false);
   }
 
@@ -500,6 +517,8 @@ export class PlaceState {
       this.netReachHi[n] = log[i + 3]!;
     }
     if (log.length) log.length = 0;
+    for (const n of this.laneJudged) this.laneSlot[n]! ^= 1;
+    if (this.laneJudged.length) this.laneJudged.length = 0;
   }
 
   private recount(back: boolean): void {
@@ -544,6 +563,9 @@ export class PlaceState {
           }
           continue;
         }
+        // Leads as they were and lanes known: judged again only when a moved body touches a lane.
+        if (!this.netDirty[n] && !this.laneTouched(n, xlo, xhi, lo, hi)) continue;
+        this.laneJudged.push(n);
         const before = this.netBlocked[n]!;
         const lo0 = this.netReachLo[n]!;
         const hi0 = this.netReachHi[n]!;
@@ -558,6 +580,16 @@ export class PlaceState {
     this.bodyColLo = Infinity;
     this.bodyColHi = -Infinity;
     this.nDirtyNets = 0;
+  }
+
+  /** Whether the box of moved body cells [x0, x1] × [y0, y1] meets one of net n's lanes (lanes unknown: true). */
+  private laneTouched(n: number, x0: number, x1: number, y0: number, y1: number): boolean {
+    const k = 2 * n + this.laneSlot[n]!;
+    if (this.laneCount[k]! < 0) return true;
+    const r = this.laneRects[k]!;
+    const end = this.laneCount[k]! * 4;
+    for (let i = 0; i < end; i += 4) if (r[i]! <= x1 && r[i + 1]! >= x0 && r[i + 2]! <= y1 && r[i + 3]! >= y0) return true;
+    return false;
   }
 
   private setBlocked(n: number, v: number): void {
