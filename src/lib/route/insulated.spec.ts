@@ -171,15 +171,18 @@ describe('room for hemmed-in islands in random crowded placements', () => {
   // Random strip placements (randomCase: seed, board, parts, nets) that the router with
   // insulated links still left in pieces before rip-ups looked at the gaps beside an
   // island, freed every hemmed island of a net at once, and let a ripped net rip up others
-  // in turn. None of them is joined by a straight insulated link over a pin.
+  // in turn; none of these is joined by a straight insulated link over a pin. The last
+  // needed the net of a relay island beside the hemmed island and another covering net
+  // ripped up together (one of 20 000 random cases).
   const cases = [
-    { seed: 216, cols: 5, rows: 7, parts: 10, nets: 3 },
-    { seed: 405, cols: 10, rows: 6, parts: 10, nets: 2 },
-    { seed: 554, cols: 7, rows: 7, parts: 5, nets: 6 },
-    { seed: 629, cols: 10, rows: 4, parts: 10, nets: 6 },
-    { seed: 871, cols: 12, rows: 4, parts: 7, nets: 3 },
+    { seed: 216, cols: 5, rows: 7, parts: 10, nets: 3, bent: true },
+    { seed: 405, cols: 10, rows: 6, parts: 10, nets: 2, bent: true },
+    { seed: 554, cols: 7, rows: 7, parts: 5, nets: 6, bent: true },
+    { seed: 629, cols: 10, rows: 4, parts: 10, nets: 6, bent: true },
+    { seed: 871, cols: 12, rows: 4, parts: 7, nets: 3, bent: true },
+    { seed: 4014, cols: 11, rows: 7, parts: 7, nets: 6, bent: false },
   ];
-  it.each(cases)('seed $seed on a $cols×$rows strip board: joined, clean, every insulated link bent', ({ seed, cols, rows, parts, nets }) => {
+  it.each(cases)('seed $seed on a $cols×$rows strip board: joined and clean', ({ seed, cols, rows, parts, nets, bent: allBent }) => {
     const c = randomCase(seed, makeBoard('strip', cols, rows), parts, nets);
     const plain = routeLayout(c.design, c.placement, { cutStyle: 'between' });
     expect(plain.ok).toBe(false);
@@ -189,7 +192,7 @@ describe('room for hemmed-in islands in random crowded placements', () => {
     expect(r.warnings.every((w) => w.code === 'route.insulated-link')).toBe(true);
     const links = bent(r.value.layout);
     expect(links).toHaveLength(r.warnings.length);
-    for (const l of links) expect(l.from[0] !== l.to[0] && l.from[1] !== l.to[1]).toBe(true);
+    if (allBent) for (const l of links) expect(l.from[0] !== l.to[0] && l.from[1] !== l.to[1]).toBe(true);
   });
 });
 

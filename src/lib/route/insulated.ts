@@ -15,11 +15,11 @@
  * state before any link) without that net's links, the stuck net is joined (by the maze search from the freed
  * island where it finds a way, else by insulated links), and the ripped net is joined again
  * by the maze search (plain, then with relay islands) and insulated links for what is left.
- * All hemmed islands of the net are freed at once (the k-th covering net of each); a ripped
- * net that is left hemmed in itself may rip up others in turn, once (DEPTH). The rip-up is
- * kept only when it joins an island of the stuck net and leaves every ripped net in no more
- * pieces than before; at most TRIES sets of nets, two tries each, and ROUNDS rip-ups per
- * net, so it ends. Nets in number order, nearest pair first, ties by
+ * All hemmed islands of the net are freed at once (the k-th covering net of each, then the
+ * first TRIES of each together); a ripped net that is left hemmed in itself may rip up
+ * others in turn, once (DEPTH). The rip-up is kept only when it joins an island of the stuck
+ * net and leaves every ripped net in no more pieces than before; at most TRIES + 1 sets of
+ * nets, two tries each, and ROUNDS rip-ups per net, so it ends. Nets in number order, nearest pair first, ties by
  * hole index. Returns the final state, the nets still in pieces (a subset of `nets`) and
  * the insulated links as flat (hole, hole, net) triples in the order they were placed.
  */
@@ -135,9 +135,10 @@ function rebuild(base: RouteState, cur: RouteState, links: number[], drop: Reado
 
 /**
  * Other nets whose links pass over or end in a hole of component `root` of `net` that could
- * otherwise take a link end (no pin, no body), in hole order: the island's own holes and
- * every hole of the gaps beside its segments, claimed or not (a neighbour's link end in the
- * gap moves the cut towards the island and takes the hole it could have landed in).
+ * otherwise take a link end (no pin, no body), or whose relay islands lie there, in hole
+ * order: the island's own holes and every hole of the gaps beside its segments, claimed or
+ * not (a neighbour's link end in the gap moves the cut towards the island and takes the hole
+ * it could have landed in).
  */
 function coveringNets(st: RouteState, net: number, root: number): number[] {
   const holes: number[] = [];
@@ -149,6 +150,10 @@ function coveringNets(st: RouteState, net: number, root: number): number[] {
   for (const h of [...new Set(holes)].sort((a, b) => a - b)) {
     const v = st.linkUse[h]! - 1;
     if (v >= 0 && v !== net && st.pin[h] === 0 && st.body[h] === 0 && !out.includes(v)) out.push(v);
+    // A relay island of another net in the gap takes the holes beside it too (cut room).
+    const r = st.claimSeg[h]!;
+    const w = r >= 0 ? st.owner[r]! : -1;
+    if (w >= 0 && w !== net && !out.includes(w)) out.push(w);
   }
   return out;
 }
@@ -175,8 +180,12 @@ function makeRoom(base: RouteState, st: RouteState, sc: Scratch, net: number, li
   const covering = stuck.map((r) => coveringNets(st, net, r)).filter((c) => c.length);
   if (!covering.length) return undefined;
   const tried = new Set<string>();
-  for (let k = 0; k < TRIES; k++) {
-    const drop = [...new Set(covering.map((c) => c[Math.min(k, c.length - 1)]!))].sort((a, b) => a - b);
+  // The k-th covering net of each island, then the first TRIES of each together (an island
+  // may be hemmed in by two nets at once: one's link over it, another's relay island beside it).
+  const sets = Array.from({ length: TRIES }, (_, k) => covering.map((c) => c[Math.min(k, c.length - 1)]!));
+  sets.push(covering.flatMap((c) => c.slice(0, TRIES)));
+  for (const set of sets) {
+    const drop = [...new Set(set)].sort((a, b) => a - b);
     if (tried.has(drop.join())) continue;
     tried.add(drop.join());
     const had = drop.map((v) => components(st, v).length);
