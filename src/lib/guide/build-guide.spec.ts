@@ -64,8 +64,13 @@ describe('buildGuide', () => {
     const [bent] = linkList({ ...l, links: [{ from: [2, 2], to: [5, 6] }] }, noNets);
     // 3 columns and 4 rows apart: 5 pitches straight across (12.7 mm), laid along the grid 7 pitches, plus 5 mm each end
     expect(bent).toMatchObject({ lengthMm: 12.7, cutMm: Math.ceil(7 * 2.54 + 10), insulated: true });
-    const steps = buildOrder([], [bent!], []);
-    expect(steps.flatMap((s) => s.items).some((t) => t.includes('insulated wire'))).toBe(true);
+    // Insulated links go in after the parts they lie over, in a step of their own.
+    const straight = linkList(l, noNets)[0]!;
+    const steps = buildOrder([], [straight, bent!], []);
+    expect(steps.map((s) => [s.stage, s.items])).toEqual([
+      ['link', [`L1 ${straight.from.component}–${straight.to.component}`]],
+      ['insulated', [`L1 ${bent!.from.component}–${bent!.to.component} (insulated wire, sleeved)`]],
+    ]);
     // Straight but over a pin, or crossing another link: insulated too.
     const pin = l.parts[0]!.pins[0]!.at;
     const overPin = linkList({ ...l, links: [{ from: [pin[0], pin[1] - 1], to: [pin[0], pin[1] + 1] }] }, noNets);
@@ -102,7 +107,7 @@ describe('buildGuide', () => {
   it('orders the build lowest first by height class', () => {
     const g = guideOf(benchCircuit(), benchBufferLayout());
     expect(g.buildOrder.map((s) => s.stage)).toEqual(['link', 'low', 'small', 'transistor', 'tall', 'offboard']);
-    const ranks = g.buildOrder.map((s) => (s.stage === 'wires' ? HEIGHT_CLASSES.indexOf('tall') + 0.5 : HEIGHT_CLASSES.indexOf(s.stage)));
+    const ranks = g.buildOrder.map((s) => (s.stage === 'wires' ? HEIGHT_CLASSES.indexOf('tall') + 0.6 : s.stage === 'insulated' ? HEIGHT_CLASSES.indexOf('tall') + 0.5 : HEIGHT_CLASSES.indexOf(s.stage)));
     expect([...ranks].sort((a, b) => a - b)).toEqual(ranks);
     expect(g.buildOrder.find((s) => s.stage === 'low')!.items).toEqual(['R1', 'R2', 'R3']);
     expect(g.buildOrder.map((s) => s.step)).toEqual([1, 2, 3, 4, 5, 6]);

@@ -70,7 +70,7 @@ export interface PartGroup {
 
 export interface BuildStep {
   step: number;
-  stage: HeightClass | 'wires';
+  stage: HeightClass | 'insulated' | 'wires';
   title: string;
   items: string[];
   note: string;

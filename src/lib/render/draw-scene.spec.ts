@@ -147,6 +147,9 @@ describe('drawScene insulated links', () => {
       expect(s.links.map((k) => k.insulated ?? false)).toEqual([true, true, false]);
       const svg = sceneSvgMarkup(s);
       expect(svg.match(/data-insulated="true"/g)).toHaveLength(2);
+      // Sleeved links lie over the parts: drawn after them.
+      expect(svg.indexOf('class="insulated-links"')).toBeGreaterThan(svg.indexOf('class="parts"'));
+      expect(svg.indexOf('class="links"')).toBeLessThan(svg.indexOf('class="parts"'));
     }
   });
 });

@@ -1,7 +1,8 @@
 /**
  * `paintScene(scene, theme = THEME): SvgNode` — the one place that decides how a Scene
  * looks: a plain tree of SVG element names, attributes and text, in drawing order (board,
- * copper, holes and joints, cuts, wires, links, parts, labels, highlights, faults). Both
+ * copper, holes and joints, cuts, wires, links, parts, insulated links (sleeved, over the
+ * parts), labels, highlights, faults). Both
  * back ends walk this tree: drawSvg builds svg.js nodes from it and svgMarkup writes an
  * escaped string, so the app, the CLI and the printed guide show the same picture.
  * Text stays text (never markup); ids, refs, nets and holes ride along as data-* attributes.
@@ -120,7 +121,10 @@ export function paintScene(scene: Scene, theme: Theme = THEME): SvgNode {
     : group('joints', []);
   const cuts = group('cuts', scene.cuts.map((c) => cutNode(c, scene, st, theme)));
   const wires = group('wires', scene.wires.map((w) => segmentNode(w, st.wire, theme.stroke.wire, st.wireOpacity, st.wireDash, theme.stroke.wire * 0.8)));
-  const links = group('links', scene.links.map((l) => segmentNode(l, st.link, theme.stroke.link, st.linkOpacity, st.linkDash, theme.stroke.link * 0.8, { colour: st.sleeve, width: theme.stroke.sleeve })));
+  const linkNode = (l: SceneSegment) => segmentNode(l, st.link, theme.stroke.link, st.linkOpacity, st.linkDash, theme.stroke.link * 0.8, { colour: st.sleeve, width: theme.stroke.sleeve });
+  const links = group('links', scene.links.filter((l) => !l.insulated).map(linkNode));
+  // Insulated wire is fitted after the parts and lies over them: drawn above them.
+  const sleeved = group('insulated-links', scene.links.filter((l) => l.insulated).map(linkNode));
   const partsLayer = group('parts', scene.parts.map((p) => partNode(p, scene, st, theme)), { opacity: st.bodyOpacity });
   const rulers = group('rulers', scene.rulers.map((r) => text({ x: r.x, y: r.y, text: r.text, size: r.size, rotate: 0 }, st.ruler, theme.font, { 'data-id': r.id })));
 
@@ -137,8 +141,8 @@ export function paintScene(scene: Scene, theme: Theme = THEME): SvgNode {
 
   const layers =
     scene.side === 'copper'
-      ? [board, copper, holes, joints, cuts, wires, links, partsLayer, rulers]
-      : [board, copper, holes, cuts, wires, links, partsLayer, rulers];
+      ? [board, copper, holes, joints, cuts, wires, links, partsLayer, sleeved, rulers]
+      : [board, copper, holes, cuts, wires, links, partsLayer, sleeved, rulers];
   const title: SvgNode[] = scene.title ? [{ tag: 'title', attrs: {}, text: scene.title }] : [];
   return group('kerfline-scene', [...title, ...layers, group('highlight', hl), group('faults', faults)], { 'data-side': scene.side });
 }
