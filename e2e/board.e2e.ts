@@ -146,6 +146,27 @@ describe('board screen', () => {
     expect((await layoutOf(page)).parts.find((p) => p.ref === ref)!.pins).toEqual(layout.parts.find((p) => p.ref === ref)!.pins);
   });
 
+  it('sleeves a bent link on the board, notes it in the checks, and lets the builder turn insulated links off', async () => {
+    const { page } = await app.open();
+    const circuit = JSON.parse(readFileSync('layouts/bench-buffer.circuit.json', 'utf8')) as Circuit;
+    const layout = LayoutSchema.parse(JSON.parse(readFileSync('layouts/bench-buffer.layout.json', 'utf8')));
+    // A hand-made bent link between two free holes: insulated wire by its geometry.
+    const used = new Set([...layout.parts.flatMap((p) => p.pins.map((q) => q.at.join())), ...layout.links.flatMap((l) => [l.from.join(), l.to.join()])]);
+    const free: [number, number][] = [];
+    for (let y = 0; y < layout.board.rows; y++) for (let x = 0; x < layout.board.cols; x++) if (!used.has(`${x},${y}`)) free.push([x, y]);
+    const from = free[0]!;
+    const to = free.find((h) => h[0] !== from[0] && h[1] !== from[1])!;
+    const bent = { ...layout, links: [...layout.links, { from, to }] };
+    const project = { format: 'kerfline.project', version: 1, source: { kind: 'json', text: JSON.stringify(circuit, null, 2) }, circuit, layout: bent, options: {} };
+    await page.evaluate((text) => window.__kerfline!.openText('sleeved.kerfline.json', text), JSON.stringify(project));
+    await expect.poll(() => page.evaluate(() => window.__kerfline!.notes().map((n) => n.code))).toContain('layout.insulated-link');
+    expect(await page.locator('[data-insulated="true"]').count()).toBeGreaterThan(0);
+    const box = page.getByTestId('opt-insulated');
+    expect(await box.isChecked()).toBe(true);
+    await box.uncheck();
+    expect(await box.isChecked()).toBe(false);
+  });
+
   it('cancels auto-place and keeps the board as it was', async () => {
     const { page } = await app.open();
     const before = await layoutOf(page);

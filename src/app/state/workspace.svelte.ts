@@ -20,6 +20,7 @@ import { fileStem, fromProject, loadDraft, readProject, saveDraft, toProject, ty
 import { bundledDemo, demoDoc } from './demo.ts';
 import { problemHoles } from './locate.ts';
 import { designAsLaid } from './design-as-laid.ts';
+import { insulatedNotes } from '../../lib/render/index.ts';
 import { startPlan, type PlanRun } from '../worker/plan-client.ts';
 import type { Result } from '../../lib/model/index.ts';
 
@@ -95,7 +96,10 @@ export class Workspace {
   notes = $derived.by((): Problem[] => {
     const seen = new Set<string>();
     const out: Problem[] = [];
-    for (const p of [...this.designResult.warnings, ...this.planWarnings, ...(this.checked?.report.warnings ?? [])]) {
+    // Insulated links are read off the board as it is now (a plan's own warnings go stale at the first edit).
+    const plan = this.planWarnings.filter((w) => w.code !== 'route.insulated-link');
+    const sleeved = this.checked ? insulatedNotes(this.checked.layout) : [];
+    for (const p of [...this.designResult.warnings, ...plan, ...sleeved, ...(this.checked?.report.warnings ?? [])]) {
       const key = `${p.code}\u0000${p.message}`;
       if (seen.has(key)) continue;
       seen.add(key);
@@ -224,7 +228,8 @@ export class Workspace {
       this.status = r.why;
       return false;
     }
-    const opts = { cutStyle: this.options.cutStyle, linksOverBodies: this.options.linksOverBodies };
+    // The live re-route may use insulated wire links when the plan may (each one is flagged).
+    const opts = { cutStyle: this.options.cutStyle, linksOverBodies: this.options.linksOverBodies, insulatedLinks: this.options.insulatedLinks };
     const checked = reroute ? this.checker.afterEdit(r.layout, [ref], this.checked?.layout ?? layout, opts) : this.checker.check(r.layout);
     if (reroute) this.lastEditMs = checked.timing.totalMs;
     this.commit({ ...this.doc, layout: checked.layout }, label, mergeKey === undefined ? { checked } : { checked, mergeKey });

@@ -19,7 +19,8 @@ async function plan(...args: string[]) {
 
 describe('kerfline plan', () => {
   it('reads its options', () => {
-    expect(parseArgs(['c.json', '--out', 'd'])).toMatchObject({ circuit: 'c.json', out: 'd', board: 'auto', seed: 1, effort: 'normal' });
+    expect(parseArgs(['c.json', '--out', 'd'])).toMatchObject({ circuit: 'c.json', out: 'd', board: 'auto', seed: 1, effort: 'normal', insulated: true });
+    expect(parseArgs(['c.json', '--no-insulated', '--out', 'd'])).toMatchObject({ insulated: false });
     expect(parseArgs(['c.json', '--seed', 'x', '--out', 'd']).error).toMatch(/--seed/);
     expect(parseArgs(['c.json', '--effort', 'huge', '--out', 'd']).error).toMatch(/--effort/);
     expect(parseArgs(['c.json']).error).toMatch(/--out/);

@@ -1,6 +1,6 @@
 /**
  * `kerfline plan <circuit> [--board strip:WxH|pads:WxH|bus:breadboard-N|auto] [--seed N]
- *   [--effort quick|normal|thorough] --out DIR`
+ *   [--effort quick|normal|thorough] [--no-insulated] --out DIR`
  *
  * Places, routes and verifies a circuit (a JSON circuit document or a SPICE deck, see
  * ../io.ts) with planLayout (src/lib/place), checks the result once more against the
@@ -11,7 +11,8 @@
  * insulated wire), link length, holes used and time, and the plan's warnings (each insulated
  * link) on stderr; shows a progress bar on stderr when stderr is a terminal.
  *
- * Defaults: --board auto, --seed 1, --effort normal.
+ * Defaults: --board auto, --seed 1, --effort normal; insulated wire links allowed as a last
+ * resort (--no-insulated: bare straight links only, or no layout).
  * Exit: 0 success, 1 no routable layout (with the reason), 2 bad input or usage.
  */
 import { basename, join } from 'node:path';
@@ -24,7 +25,7 @@ import { verifyLayout } from '../../lib/verify/index.ts';
 import { loadCircuit, printProblems, writeTextFile } from '../io.ts';
 import { sceneToSvgString } from '../svg-node.ts';
 
-const USAGE = 'usage: kerfline plan <circuit.json|netlist.cir> [--board strip:WxH|pads:WxH|bus:breadboard-N|auto] [--seed N] [--effort quick|normal|thorough] --out DIR\n';
+const USAGE = 'usage: kerfline plan <circuit.json|netlist.cir> [--board strip:WxH|pads:WxH|bus:breadboard-N|auto] [--seed N] [--effort quick|normal|thorough] [--no-insulated] --out DIR\n';
 const EFFORTS = ['quick', 'normal', 'thorough'] as const;
 
 interface Args {
@@ -32,12 +33,14 @@ interface Args {
   board: string;
   seed: number;
   effort: (typeof EFFORTS)[number];
+  /** Insulated wire links allowed as a last resort (--no-insulated: never). */
+  insulated: boolean;
   out?: string;
   error?: string;
 }
 
 export function parseArgs(args: string[]): Args {
-  const out: Args = { board: 'auto', seed: 1, effort: 'normal' };
+  const out: Args = { board: 'auto', seed: 1, effort: 'normal', insulated: true };
   for (let i = 0; i < args.length; i++) {
     const a = args[i]!;
     const value = (): string | undefined => {
@@ -54,7 +57,8 @@ export function parseArgs(args: string[]): Args {
       const v = value();
       if (v !== undefined && !(EFFORTS as readonly string[]).includes(v)) out.error = `--effort is quick, normal or thorough, not "${v}"`;
       else if (v !== undefined) out.effort = v as Args['effort'];
-    } else if (a === '--out') out.out = value();
+    } else if (a === '--no-insulated') out.insulated = false;
+    else if (a === '--out') out.out = value();
     else if (a.startsWith('-')) out.error = `unknown option ${a}`;
     else if (!out.circuit) out.circuit = a;
     else out.error = `too many files (${a}): give one circuit`;
@@ -64,12 +68,13 @@ export function parseArgs(args: string[]): Args {
   return out;
 }
 
-/** `twin-lfo.circuit.json` → `twin-lfo`; `deck.cir` → `deck`. */
 /** The summary's links line: how many, how many must be insulated wire, and their length. */
 export function linksLine(layout: Layout, lengthMm: number): string {
   const insulated = insulatedLinks(layout).filter(Boolean).length;
   return `links      ${layout.links.length}${insulated ? ` (${insulated} insulated wire)` : ''}, ${lengthMm.toFixed(1)} mm in all`;
 }
+
+/** `twin-lfo.circuit.json` → `twin-lfo`; `deck.cir` → `deck`. */
 
 export function layoutName(path: string): string {
   return basename(path).replace(/\.circuit\.json$/i, '').replace(/\.[^.]+$/, '') || 'layout';
@@ -128,7 +133,7 @@ export async function run(args: string[], out: Out = process.stdout, err: Out = 
   }
   printProblems(loaded.warnings.filter((w) => w.severity === 'warning'), err, a.circuit);
   const { circuit, design } = loaded.value;
-  const options: PlanOptionsInput = { seed: a.seed, effort: a.effort };
+  const options: PlanOptionsInput = { seed: a.seed, effort: a.effort, insulatedLinks: a.insulated };
   if (spec.value.kind === 'fixed') {
     const b = spec.value.board;
     options.board = { kind: b.kind, cols: b.cols, rows: b.rows, ...(b.pattern ? { pattern: b.pattern } : {}) };

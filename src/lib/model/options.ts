@@ -38,6 +38,8 @@ export const PlanOptionsSchema = z.object({
   keepOut: z.array(KeepOutSchema).default([]),
   /** Allow links to pass over part bodies (a link under a resistor, say). */
   linksOverBodies: z.boolean().default(false),
+  /** Allow insulated wire links as a last resort (each one flagged); false: bare straight links only. */
+  insulatedLinks: z.boolean().default(true),
 });
 export type PlanOptions = z.infer<typeof PlanOptionsSchema>;
 export type PlanOptionsInput = z.input<typeof PlanOptionsSchema>;

@@ -6,6 +6,7 @@ import { planLayout, planScore } from './plan.ts';
 import { circuitOfDesign } from './circuit-of-design.ts';
 import { plantedInstance } from './planted.ts';
 import { prepareDesign } from '../netlist/design.ts';
+import { insulatedLinks } from '../render/index.ts';
 import { circuitOf, designOf } from './test-kit.ts';
 
 // A small follower stage of our own (common practice values).
@@ -76,6 +77,21 @@ describe('planLayout', () => {
   it('verifies clean without being handed the circuit (rebuilt from the design)', () => {
     const r = planLayout(designOf(follower), { effort: 'quick', seed: 2 });
     expect(r.ok).toBe(true);
+  });
+
+  it('uses insulated wire links only when allowed, each one flagged (planted 70 parts, seed 4, quick)', () => {
+    const inst = plantedInstance(70, 4);
+    const count = (r: ReturnType<typeof planLayout>) => {
+      if (!r.ok) throw new Error(r.problems.map((p) => p.message).join('\n'));
+      const warned = r.warnings.filter((w) => w.code === 'route.insulated-link').length;
+      // The warnings name exactly the links the drawing and the guide call insulated.
+      expect(insulatedLinks(r.value.layout).filter(Boolean)).toHaveLength(warned);
+      return warned;
+    };
+    // This design needs some at quick effort when they are allowed (the default)…
+    expect(count(planLayout(inst.design, { effort: 'quick' }))).toBeGreaterThan(0);
+    // …and routes with bare straight links only (more routing rounds) when they are not.
+    expect(count(planLayout(inst.design, { effort: 'quick', insulatedLinks: false }))).toBe(0);
   });
 
   it('keeps pins out of keep-out areas on a fixed board', () => {

@@ -6,7 +6,8 @@
  * of kind `autoKind`) or a fixed board; `cutStyle`, `seed` (1), `effort` ('normal'),
  * `padsEdge` ('left'), `supplyAtEdges` (true), `locked` refs (kept where `context.previous`
  * has them; with 'auto' the previous board is used), `keepOut` rectangles,
- * `linksOverBodies`. Hooks: `onProgress({ phase, fraction, cost, best })` with phases
+ * `linksOverBodies`, `insulatedLinks` (true: late routing rounds may use insulated wire
+ * links, each flagged; false: never). Hooks: `onProgress({ phase, fraction, cost, best })` with phases
  * spread, snap, anneal, route, verify; `shouldStop()` ends the annealing early and stops
  * further attempts (what has been found is still routed and checked). `context.circuit` is
  * the circuit to verify against (rebuilt from the design when absent).
@@ -206,7 +207,7 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
     const placement = placementLayout(cur.state, routedDesign, frame, new Set(env.locked.keys()));
     env.progress('route', round / rounds, cur.anneal.cost, cur.anneal.cost);
     // Insulated wire links only as a late resort, never while shrinking (see INSULATED_ROUND).
-    const insulated = !shrinking && round >= (big ? INSULATED_ROUND : rounds - 1);
+    const insulated = opts.insulatedLinks && !shrinking && round >= (big ? INSULATED_ROUND : rounds - 1);
     const routed = routeLayout(routedDesign, placement, { cutStyle: opts.cutStyle, linksOverBodies: opts.linksOverBodies, insulatedLinks: insulated });
     if (routed.ok) {
       env.progress('verify', 0, cur.anneal.cost, cur.anneal.cost);

@@ -6,6 +6,7 @@ import { prepareDesign, type Design } from '../netlist/design.ts';
 import { drawScene } from './draw-scene.ts';
 import { benchBufferLayout } from './fixture.ts';
 import { sceneSvgMarkup } from './markup.ts';
+import { insulatedNotes } from './insulated.ts';
 
 function benchDesign(): Design {
   const circuit = CircuitSchema.parse(JSON.parse(readFileSync(new URL('../../../layouts/bench-buffer.circuit.json', import.meta.url), 'utf8')));
@@ -147,6 +148,11 @@ describe('drawScene insulated links', () => {
       expect(s.links.map((k) => k.insulated ?? false)).toEqual([true, true, false]);
       const svg = sceneSvgMarkup(s);
       expect(svg.match(/data-insulated="true"/g)).toHaveLength(2);
+      // One note per sleeved link, naming it and its holes from both sides.
+      expect(insulatedNotes({ ...l, links }).map((n) => [n.code, n.path, n.holes])).toEqual([
+        ['layout.insulated-link', ['links', 0], [links[0]!.from, links[0]!.to]],
+        ['layout.insulated-link', ['links', 1], [links[1]!.from, links[1]!.to]],
+      ]);
       // Sleeved links lie over the parts: drawn after them.
       expect(svg.indexOf('class="insulated-links"')).toBeGreaterThan(svg.indexOf('class="parts"'));
       expect(svg.indexOf('class="links"')).toBeLessThan(svg.indexOf('class="parts"'));

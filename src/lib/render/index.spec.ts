@@ -3,6 +3,6 @@ import * as render from './index.ts';
 
 describe('render module surface', () => {
   it('exports exactly the public names', () => {
-    expect(Object.keys(render).sort()).toEqual(['THEME', 'drawScene', 'drawSvg', 'escapeXml', 'insulatedLinks', 'lineHoles', 'paintScene', 'sceneSvgMarkup', 'svgMarkup']);
+    expect(Object.keys(render).sort()).toEqual(['THEME', 'drawScene', 'drawSvg', 'escapeXml', 'insulatedLinks', 'insulatedNotes', 'lineHoles', 'paintScene', 'sceneSvgMarkup', 'svgMarkup']);
   });
 });

@@ -7,7 +7,8 @@
  *   with no DOM at all (the printed guide). Both walk `paintScene`, so they match.
  * - `THEME` holds every colour and line weight.
  * - `insulatedLinks(layout): boolean[]` — which links must be insulated wire, read off the
- *   geometry; `lineHoles(from, to)` — the holes a straight run passes over.
+ *   geometry, and `insulatedNotes(layout)` a warning for each; `lineHoles(from, to)` — the
+ *   holes a straight run passes over.
  */
 export { drawScene } from './draw-scene.ts';
 export type { DrawOptions } from './draw-scene.ts';
@@ -17,7 +18,7 @@ export type { SvgNode } from './paint.ts';
 export { svgMarkup, sceneSvgMarkup, escapeXml } from './markup.ts';
 export type { MarkupOptions } from './markup.ts';
 export { THEME } from './theme.ts';
-export { insulatedLinks, lineHoles } from './insulated.ts';
+export { insulatedLinks, insulatedNotes, lineHoles } from './insulated.ts';
 export type { Theme, SideStyle } from './theme.ts';
 export type {
   Scene,

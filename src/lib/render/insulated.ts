@@ -8,9 +8,12 @@
  * guide lists them as such.
  * `lineHoles(from, to)`: the holes a straight run passes over, ends included (both ends only
  * when it is not straight).
+ * `insulatedNotes(layout)`: a `layout.insulated-link` warning per such link, for any layout
+ * (planned, hand-edited or opened), naming its holes from both sides.
  */
+import { holeLabelBoth } from '../board/labels.ts';
 import type { Layout } from '../model/layout.ts';
-import type { Hole } from '../model/problem.ts';
+import type { Hole, Problem } from '../model/problem.ts';
 
 export function lineHoles(from: Hole, to: Hole): Hole[] {
   if (from[0] !== to[0] && from[1] !== to[1]) return [from, to];
@@ -26,4 +29,22 @@ export function insulatedLinks(layout: Pick<Layout, 'parts' | 'links'>): boolean
   const self = layout.links.map((l) => (l.from[0] !== l.to[0] && l.from[1] !== l.to[1]) || lineHoles(l.from, l.to).slice(1, -1).some((h) => pins.has(key(h))));
   const covered = layout.links.map((l) => new Set(lineHoles(l.from, l.to).map(key)));
   return layout.links.map((l, i) => self[i]! || lineHoles(l.from, l.to).some((h) => covered.some((c, j) => j !== i && !self[j] && c.has(key(h)))));
+}
+
+export function insulatedNotes(layout: Pick<Layout, 'parts' | 'links' | 'board'>): Problem[] {
+  const out: Problem[] = [];
+  insulatedLinks(layout).forEach((yes, i) => {
+    if (!yes) return;
+    const l = layout.links[i]!;
+    const [a, b] = [holeLabelBoth(l.from, layout.board.cols), holeLabelBoth(l.to, layout.board.cols)];
+    out.push({
+      code: 'layout.insulated-link',
+      severity: 'warning',
+      path: ['links', i],
+      message: `link ${i + 1} from ${a} to ${b} must be insulated wire: it is bent, or passes over a pin or another link`,
+      hint: 'use sleeved hook-up wire and fit it after the parts it lies over',
+      holes: [l.from, l.to],
+    });
+  });
+  return out;
 }
