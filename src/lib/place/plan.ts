@@ -7,8 +7,8 @@
  * `padsEdge` ('left'), `supplyAtEdges` (true), `locked` refs (kept where `context.previous`
  * has them; with 'auto' the previous board is used), `keepOut` rectangles,
  * `linksOverBodies`, `insulatedLinks` (true: late routing rounds may use insulated wire
- * links, each flagged; false: never). Hooks: `onProgress({ phase, fraction, cost, best })` with phases
- * spread, snap, anneal, route, verify; `shouldStop()` ends the annealing early and stops
+ * links, each flagged; false: never). Hooks: `onProgress({ phase, fraction, cost, best })`
+ * with phases spread, snap, anneal, route, verify; `shouldStop()` ends the annealing early and stops
  * further attempts (what has been found is still routed and checked). `context.circuit` is
  * the circuit to verify against (rebuilt from the design when absent).
  *
@@ -21,10 +21,11 @@
  * they help those nets (spread.ts: cuts and links stay as they were), or else those nets
  * weigh more and it is polished again (also when, on a big design, the count of failed nets
  * stops falling once insulated links are allowed: free columns no longer reach the last
- * hemmed-in leads) — up to ROUNDS routings (BIG_ROUNDS on big designs), each cheap next to a fresh
- * annealing; late rounds may use insulated wire links (INSULATED_ROUND). A failed attempt
- * is retried on a bigger board (auto) or with the next seed, with a looser area weight; when all fail the
- * result is `place.no-layout` with every reason. Normal and thorough effort first plan as
+ * hemmed-in leads) — up to ROUNDS routings (BIG_ROUNDS on big designs), each cheap next to
+ * a fresh annealing; late rounds may use insulated wire links (INSULATED_ROUND), and a big
+ * design that needed some is spread for them and routed again (SLEEVE_ROUNDS). A failed
+ * attempt is retried on a bigger board (auto) or with the next seed, with a looser area
+ * weight; when all fail the result is `place.no-layout` with every reason. Normal and thorough effort first plan as
  * quick does, then carry on annealing from the quick placement for the rest of their steps
  * and keep the better layout (planScore), so they are never worse than quick for a seed;
  * designs of more than CARRY_PARTS parts skip the quick pre-pass and search at their effort
@@ -223,7 +224,7 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
   for (let round = 0; round < rounds + extra; round++) {
     const routedDesign = designAfterSwaps(design, cur.state, problem.sections, cur.slotSections);
     const placement = placementLayout(cur.state, routedDesign, frame, new Set(env.locked.keys()));
-    env.progress('route', round / rounds, cur.anneal.cost, cur.anneal.cost);
+    env.progress('route', Math.min(1, round / rounds), cur.anneal.cost, cur.anneal.cost);
     // Insulated wire links only as a late resort, never while shrinking (see INSULATED_ROUND).
     const insulated = opts.insulatedLinks && !shrinking && round >= (big ? INSULATED_ROUND : rounds - 1);
     const routed = routeLayout(routedDesign, placement, { cutStyle: opts.cutStyle, linksOverBodies: opts.linksOverBodies, insulatedLinks: insulated });
@@ -232,7 +233,7 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
       const report = verifyLayout(env.circuit, routed.value.layout);
       if (!report.clean) {
         env.reasons.push(`${boardName(frame)}: the routed layout failed verification (${report.faults.map((f) => f.code).join(', ')})`);
-        return undefined;
+        return best?.found;
       }
       const layout: Layout = { ...routed.value.layout, meta: { program: PROGRAM, seed: opts.seed, effort: opts.effort, attempt: attempt + 1 } };
       const cost = placementCost(cur.state, set.weights).total;

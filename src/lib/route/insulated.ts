@@ -11,16 +11,17 @@
  * link of the router's is (guide/segments.ts).
  *
  * An island with no free landing hole because other nets' straight links pass over (or end
- * in) its copper or the gaps beside it gets room: the state is rebuilt from `base` (the
- * state before any link) without that net's links, the stuck net is joined (by the maze search from the freed
- * island where it finds a way, else by insulated links), and the ripped net is joined again
- * by the maze search (plain, then with relay islands) and insulated links for what is left.
- * All hemmed islands of the net are freed at once (the k-th covering net of each, then the
- * first TRIES of each together); a ripped net that is left hemmed in itself may rip up
- * others in turn, once (DEPTH). The rip-up is kept only when it joins an island of the stuck
- * net and leaves every ripped net in no more pieces than before; at most TRIES + 1 sets of
- * nets, two tries each, and ROUNDS rip-ups per net, so it ends. Nets in number order, nearest pair first, ties by
- * hole index. Returns the final state, the nets still in pieces (a subset of `nets`) and
+ * in) its copper or the gaps beside it, or their relay islands lie beside it, gets room: the
+ * state is rebuilt from `base` (the state before any link) without those nets' links, the
+ * stuck net is joined (by the maze search from the freed island where it finds a way, else
+ * by insulated links), and each ripped net is joined again by the maze search (plain, then
+ * with relay islands) and insulated links for what is left. All hemmed islands of the net
+ * are freed at once (the k-th covering net of each, then the first TRIES of each together);
+ * a ripped net that is left hemmed in itself may rip up others in turn, once (DEPTH). The
+ * rip-up is kept only when it joins an island of the stuck net and leaves every ripped net
+ * in no more pieces than before; at most TRIES + 1 sets of nets, two tries each, and ROUNDS
+ * rip-ups per net, so it ends. Nets in number order, nearest pair first, ties by hole
+ * index. Returns the final state, the nets still in pieces (a subset of `nets`) and
  * the insulated links as flat (hole, hole, net) triples in the order they were placed.
  */
 import { landLink, landingSeg, lineStep } from './landing.ts';
@@ -203,10 +204,8 @@ function makeRoom(base: RouteState, st: RouteState, sc: Scratch, net: number, li
         for (const v of drop) rejoin(next, sc, v, kept);
         let done: [RouteState, number[]] | undefined = [next, kept];
         // A ripped net left hemmed in may make room for itself in turn, once (DEPTH).
-        for (const v of drop) {
-          if (!done || depth >= DEPTH || components(done[0], v).length <= had[drop.indexOf(v)]!) continue;
-          done = makeRoom(base, done[0], sc, v, done[1], depth + 1);
-        }
+        for (let i = 0; i < drop.length && done && depth < DEPTH; i++)
+          if (components(done[0], drop[i]!).length > had[i]!) done = makeRoom(base, done[0], sc, drop[i]!, done[1], depth + 1);
         if (done && components(done[0], net).length < comps.length && drop.every((v, i) => components(done[0], v).length <= had[i]!)) return done;
       }
       if (!mazed) break; // this try was the insulated-only one already
