@@ -75,14 +75,15 @@ describe('buildGuide', () => {
     const pin = l.parts[0]!.pins[0]!.at;
     const overPin = linkList({ ...l, links: [{ from: [pin[0], pin[1] - 1], to: [pin[0], pin[1] + 1] }] }, noNets);
     expect(overPin[0]!.insulated).toBe(true);
-    const crossing = linkList({ ...l, links: [{ from: [20, 0], to: [20, 4] }, { from: [18, 2], to: [22, 2] }] }, noNets);
+    // No pin on column 10 rows 0–4, on row 2 columns 8–12, nor on columns 12 and 13.
+    const crossing = linkList({ ...l, links: [{ from: [10, 0], to: [10, 4] }, { from: [8, 2], to: [12, 2] }] }, noNets);
     expect(crossing.map((i) => i.insulated ?? false)).toEqual([true, true]);
     // A bare link crossing an insulated one (over a pin) stays bare: the sleeve parts them.
     // R1 has a pin at [7, 3]; no pin lies on row 2 from column 6 to 8.
     expect(l.parts.flatMap((p) => p.pins.map((q) => q.at.join()))).toContain('7,3');
     const sleeved = linkList({ ...l, links: [{ from: [7, 2], to: [7, 4] }, { from: [6, 2], to: [8, 2] }] }, noNets);
     expect(sleeved.map((i) => i.insulated ?? false)).toEqual([true, false]);
-    const apart = linkList({ ...l, links: [{ from: [20, 0], to: [20, 4] }, { from: [21, 0], to: [21, 4] }] }, noNets);
+    const apart = linkList({ ...l, links: [{ from: [12, 0], to: [12, 4] }, { from: [13, 0], to: [13, 4] }] }, noNets);
     expect(apart.map((i) => i.insulated ?? false)).toEqual([false, false]);
   });
 
