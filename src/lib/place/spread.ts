@@ -13,11 +13,12 @@
  * segments on different rows (of different islands, when the router named them) both reach
  * (strip boards), or in the middle of its leads (other boards). On a strip board a net with
  * no such column gets a column beside each of its islands and a free row among (or beside)
- * the rows of its leads; islands of a single lead get a column beside them anyway; and when
- * no more than FEW nets failed, every lead of their islands gets a free column on each side
- * at the nearest boundary no body crosses before the next lead along its strip — past the
- * body when one covers the holes beside the lead (a lead hemmed in by other nets' leads and
- * bodies then has a free hole on its own copper). Undefined when nothing helps or may be added (boards with their own
+ * the rows of its leads; islands of a single lead get a column beside them anyway. When no
+ * more than FEW nets failed (strip and pad boards), every lead of their islands gets a free
+ * column on each side at the nearest boundary no body crosses before the next lead along its
+ * row — past the body when one covers the holes beside the lead (a lead hemmed in by other
+ * nets' leads and bodies then has a free hole on its own copper, or on a pad board a free
+ * neighbour for a copper-side wire). Undefined when nothing helps or may be added (boards with their own
  * copper other than the breadboard pattern keep their size).
  */
 import type { Board } from '../model/layout.ts';
@@ -196,7 +197,7 @@ export function spreadLanes(s: PlaceState, board: Board, failed: FailedNet[]): {
   const colSet = new Set<number>();
   const rowSet = new Set<number>();
   // Few nets left: room on both sides of every lead of their islands.
-  if (failed.length <= FEW && s.map.alongRows) {
+  if (failed.length <= FEW && (s.map.alongRows || s.map.padLike)) {
     const leads = new Set(s.netHoles.flat());
     for (const { islands } of failed)
       for (const h of (islands ?? []).flat()) {
