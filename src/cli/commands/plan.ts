@@ -75,7 +75,6 @@ export function linksLine(layout: Layout, lengthMm: number): string {
 }
 
 /** `twin-lfo.circuit.json` → `twin-lfo`; `deck.cir` → `deck`. */
-
 export function layoutName(path: string): string {
   return basename(path).replace(/\.circuit\.json$/i, '').replace(/\.[^.]+$/, '') || 'layout';
 }

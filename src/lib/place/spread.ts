@@ -18,8 +18,8 @@
  * column on each side at the nearest boundary no body crosses before the next lead along its
  * row — past the body when one covers the holes beside the lead (a lead hemmed in by other
  * nets' leads and bodies then has a free hole on its own copper, or on a pad board a free
- * neighbour for a copper-side wire). Undefined when nothing helps or may be added (boards with their own
- * copper other than the breadboard pattern keep their size).
+ * neighbour for a copper-side wire). Undefined when nothing helps or may be added (boards
+ * with their own copper other than the breadboard pattern keep their size).
  */
 import type { Board } from '../model/layout.ts';
 import type { Problem } from '../model/problem.ts';
