@@ -6,7 +6,7 @@ import { benchBufferLayout } from '../render/fixture.ts';
 import { buildGuide } from './build-guide.ts';
 import { linkList } from './segments.ts';
 import { buildOrder } from './build-order.ts';
-import type { Scene } from '../render/index.ts';
+import { drawScene } from '../render/index.ts';
 
 function benchCircuit(): Circuit {
   return CircuitSchema.parse(JSON.parse(readFileSync(new URL('../../../layouts/bench-buffer.circuit.json', import.meta.url), 'utf8')));
@@ -59,13 +59,14 @@ describe('buildGuide', () => {
 
   it('marks a link out of one row and column as an insulated wire, cut to its row-plus-column span', () => {
     const l = benchBufferLayout();
-    const noNets = { links: [], wires: [] } as unknown as Scene;
-    expect(linkList(l, noNets).some((i) => i.insulated)).toBe(false);
-    const [bent] = linkList({ ...l, links: [{ from: [2, 2], to: [5, 6] }] }, noNets);
+    // The guide reads nets and insulated links off the component-side scene, as buildGuide draws it.
+    const list = (layout: typeof l) => linkList(layout, drawScene(layout, undefined, { side: 'component' }));
+    expect(list(l).some((i) => i.insulated)).toBe(false);
+    const [bent] = list({ ...l, links: [{ from: [2, 2], to: [5, 6] }] });
     // 3 columns and 4 rows apart: 5 pitches straight across (12.7 mm), laid along the grid 7 pitches, plus 5 mm each end
     expect(bent).toMatchObject({ lengthMm: 12.7, cutMm: Math.ceil(7 * 2.54 + 10), insulated: true });
     // Insulated links go in after the parts they lie over, in a step of their own.
-    const straight = linkList(l, noNets)[0]!;
+    const straight = list(l)[0]!;
     const steps = buildOrder([], [straight, bent!], []);
     expect(steps.map((s) => [s.stage, s.items])).toEqual([
       ['link', [`L1 ${straight.from.component}–${straight.to.component}`]],
@@ -73,17 +74,17 @@ describe('buildGuide', () => {
     ]);
     // Straight but over a pin, or crossing another link: insulated too.
     const pin = l.parts[0]!.pins[0]!.at;
-    const overPin = linkList({ ...l, links: [{ from: [pin[0], pin[1] - 1], to: [pin[0], pin[1] + 1] }] }, noNets);
+    const overPin = list({ ...l, links: [{ from: [pin[0], pin[1] - 1], to: [pin[0], pin[1] + 1] }] });
     expect(overPin[0]!.insulated).toBe(true);
     // No pin on column 10 rows 0–4, on row 2 columns 8–12, nor on columns 12 and 13.
-    const crossing = linkList({ ...l, links: [{ from: [10, 0], to: [10, 4] }, { from: [8, 2], to: [12, 2] }] }, noNets);
+    const crossing = list({ ...l, links: [{ from: [10, 0], to: [10, 4] }, { from: [8, 2], to: [12, 2] }] });
     expect(crossing.map((i) => i.insulated ?? false)).toEqual([true, true]);
     // A bare link crossing an insulated one (over a pin) stays bare: the sleeve parts them.
     // R1 has a pin at [7, 3]; no pin lies on row 2 from column 6 to 8.
     expect(l.parts.flatMap((p) => p.pins.map((q) => q.at.join()))).toContain('7,3');
-    const sleeved = linkList({ ...l, links: [{ from: [7, 2], to: [7, 4] }, { from: [6, 2], to: [8, 2] }] }, noNets);
+    const sleeved = list({ ...l, links: [{ from: [7, 2], to: [7, 4] }, { from: [6, 2], to: [8, 2] }] });
     expect(sleeved.map((i) => i.insulated ?? false)).toEqual([true, false]);
-    const apart = linkList({ ...l, links: [{ from: [12, 0], to: [12, 4] }, { from: [13, 0], to: [13, 4] }] }, noNets);
+    const apart = list({ ...l, links: [{ from: [12, 0], to: [12, 4] }, { from: [13, 0], to: [13, 4] }] });
     expect(apart.map((i) => i.insulated ?? false)).toEqual([false, false]);
   });
 

@@ -2,11 +2,12 @@
  * Links (component side) and copper-side wires as bench lists: both end holes named from
  * both sides, the span in mm, and the length of wire to cut — the span plus
  * `LEAD_ALLOWANCE_MM` at each end to pass through the board and bend over (common practice).
- * A link that must be insulated wire (render/insulated.ts: bent, over a pin, or two otherwise
- * bare links that cross) is marked, and cut to its row-plus-column span (laid along the grid).
+ * A link that must be insulated wire (the scene's flag, render/insulated.ts: bent, over a pin,
+ * or two otherwise bare links that cross) is marked, and cut to its row-plus-column span
+ * (laid along the grid).
  */
 import type { Layout, Segment } from '../model/layout.ts';
-import { insulatedLinks, type Scene } from '../render/index.ts';
+import type { Scene } from '../render/index.ts';
 import { holeName } from './placed.ts';
 import type { SegmentItem } from './types.ts';
 
@@ -29,10 +30,9 @@ function item(kind: 'link' | 'wire', s: Segment, i: number, layout: Layout, net:
   return out;
 }
 
-/** Nets are read off the scene, which joined the copper already. */
+/** Nets, and which links must be insulated wire, are read off the scene (drawScene worked them out already). */
 export function linkList(layout: Layout, scene: Scene): SegmentItem[] {
-  const insulated = insulatedLinks(layout);
-  return layout.links.map((l, i) => item('link', l, i, layout, scene.links[i]?.net, LEAD_ALLOWANCE_MM, insulated[i]));
+  return layout.links.map((l, i) => item('link', l, i, layout, scene.links[i]?.net, LEAD_ALLOWANCE_MM, scene.links[i]?.insulated ?? false));
 }
 
 /** Copper-side wires lie on the pads: only their ends are bent, so a smaller allowance. */

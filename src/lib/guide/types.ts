@@ -47,7 +47,7 @@ export interface SegmentItem {
   /** Length of wire to cut: the span plus a lead through each hole (common practice). */
   cutMm: number;
   net?: string;
-  /** A link that is not in one row or column: sleeved wire, laid along the grid (cut to the row-plus-column span). */
+  /** A link that must be insulated wire (bent, over a pin, or crossing another would-be bare link): sleeved, laid along the grid (cut to the row-plus-column span). */
   insulated?: true;
 }
 

@@ -4,8 +4,9 @@
  * Builds the plain drawing data for one side of a layout: board outline, every hole, the
  * copper left after cuts (strip segments, bus-board groups, lone pads), cuts (drilled: a
  * ring at the hole; scored: a bar across the copper between two holes), links (those that
- * must be insulated wire flagged, see insulated.ts, and drawn sleeved), copper-side wires, parts (posed outlines with pin-1, "+" and cathode marks, ref and value), row
- * letters and column numbers. `side: 'copper'` mirrors every x (x → width − x) and numbers
+ * must be insulated wire flagged, see insulated.ts, and drawn sleeved), copper-side wires,
+ * parts (posed outlines with pin-1, "+" and cathode marks, ref and value), row letters and
+ * column numbers. `side: 'copper'` mirrors every x (x → width − x) and numbers
  * the columns as read from the copper side. Nets come from the design (pin → net) joined
  * through the copper, links and wires; without a design nothing carries a net.
  * `highlightNet` marks every hole, copper run, link, wire and pin on that net; `faults`

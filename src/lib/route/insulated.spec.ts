@@ -22,7 +22,7 @@ import { handCase, type HandCase, type HandPart } from './testing/hand.ts';
 import { randomCase } from './testing/random-placement.ts';
 import { wireIslands } from './wiring.ts';
 import { linkList } from '../guide/segments.ts';
-import type { Scene } from '../render/index.ts';
+import { drawScene } from '../render/index.ts';
 
 const INSULATED: RouteOptionsInput = { cutStyle: 'between', insulatedLinks: true };
 
@@ -32,7 +32,7 @@ function pad(ref: string, net: string, x: number, y: number): HandPart {
 
 /** Links the bench guide lists as insulated wire (not straight, or over a pin or another link). */
 function bent(layout: Layout): Layout['links'] {
-  const items = linkList(layout, { links: [], wires: [] } as unknown as Scene);
+  const items = linkList(layout, drawScene(layout, undefined, { side: 'component' }));
   return layout.links.filter((_, i) => items[i]!.insulated);
 }
 
