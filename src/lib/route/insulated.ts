@@ -1,14 +1,15 @@
 /**
  * `insulatedLinks(base, st, scratch, nets): { st, left, links }` — the last resort for the
  * nets joinRest left in pieces, used only when the options allow it: an insulated wire link
- * on the component side between the nearest two free landing holes of two of the net's
- * islands (row plus column distance). It lies over whatever is between its ends (sleeved
+ * on the component side between the nearest two free landing holes of the net's first
+ * island (in component order) and any other (row plus column distance), again while it is
+ * in pieces. It lies over whatever is between its ends (sleeved
  * hook-up wire, common practice for a long hop), so it blocks nothing but its two holes; the
  * exchange contract joins a link's two ends only. Every reader tells it from a bare link by
  * its geometry: its ends are in different rows and columns, or, in one row or column, it
  * passes over a pin (two islands of one strip with other nets' leads between them) — the
- * bench guide marks a link insulated when it is bent or straight over a pin, which no bare
- * link of the router's is (guide/segments.ts).
+ * drawing and the bench guide mark a link insulated when it is bent or straight over a pin,
+ * which no bare link of the router's is (render/insulated.ts).
  *
  * An island with no free landing hole because other nets' straight links pass over (or end
  * in) its copper or the gaps beside it, or their relay islands lie beside it, gets room: the
@@ -28,7 +29,7 @@ import { landLink, landingSeg, lineStep } from './landing.ts';
 import { connect } from './maze.ts';
 import { replay } from './replay.ts';
 import { reserveScarce } from './reserve.ts';
-import type { Scratch, SearchOptions } from './search.ts';
+import { PLAIN, RELAYS, type Scratch } from './search.ts';
 import { components, find, isMulti, segmentHoles, type RouteState } from './state.ts';
 
 /** Covering nets tried per stuck island, in hole order: each try replays the whole state. */
@@ -37,8 +38,6 @@ const TRIES = 3;
 const DEPTH = 1;
 /** Rip-ups kept per net, each freeing one stuck island: bounds the work. */
 const ROUNDS = 3;
-const PLAIN: SearchOptions = { wires: true, links: true, unowned: true };
-const RELAYS: SearchOptions = { ...PLAIN, relays: true };
 
 export interface Insulated {
   st: RouteState;

@@ -20,7 +20,7 @@
  */
 import { hasExit } from './exits.ts';
 import { connect, linkBlockers } from './maze.ts';
-import type { Scratch, SearchOptions } from './search.ts';
+import { PLAIN, RELAYS, type Scratch } from './search.ts';
 import { replay } from './replay.ts';
 import { reserveScarce } from './reserve.ts';
 import { components, type RouteState } from './state.ts';
@@ -32,12 +32,12 @@ const MAX_RIPS = 3;
  * pieces; with 2, 4 or no limit 34–36 and 28, in up to three times the time).
  */
 const RELAY_RIPS = 1;
-const PLAIN: SearchOptions = { wires: true, links: true, unowned: true };
-const RELAYS: SearchOptions = { ...PLAIN, relays: true };
 
 export function joinRest(base: RouteState, start: RouteState, sc: Scratch): { st: RouteState; failed: number[] } {
-  let st = joinRound(base, start, sc, false);
-  if (inPieces(st).length) st = joinRound(base, st, sc, true);
+  let st = joinRound(base, start, sc, false, inPieces(start));
+  const left = inPieces(st);
+  if (!left.length) return { st, failed: left };
+  st = joinRound(base, st, sc, true, left);
   // Whatever the rounds did, a net in pieces is reported: never a partial layout.
   return { st, failed: inPieces(st) };
 }
@@ -48,11 +48,10 @@ function inPieces(st: RouteState): number[] {
   return out;
 }
 
-/** One round over the nets in pieces, with or without relay islands. */
-function joinRound(base: RouteState, start: RouteState, sc: Scratch, relays: boolean): RouteState {
+/** One round over the nets in pieces (`queue`, taken), with or without relay islands. */
+function joinRound(base: RouteState, start: RouteState, sc: Scratch, relays: boolean, queue: number[]): RouteState {
   let st = start;
   const opts = relays ? RELAYS : PLAIN;
-  const queue = inPieces(st);
   const rips = new Int32Array(st.netCount);
   let budget = relays ? RELAY_RIPS : 2 * queue.length + 4;
   while (queue.length) {

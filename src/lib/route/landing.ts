@@ -7,8 +7,8 @@
  * - Kept holes (reserve.ts) are advice, not law: the spanning tree keeps off them, the maze
  *   search pays to use them.
  */
-import { claimHole, gapSegOf, gapSide } from './claims.ts';
-import { claimSegment, union, type RouteState } from './state.ts';
+import { claimHole, gapSide } from './claims.ts';
+import { claimSegment, copperSegOf, union, type RouteState } from './state.ts';
 
 /** Whether a link may pass over (or end in) this hole at all. */
 export function linkClear(st: RouteState, h: number): boolean {
@@ -22,8 +22,7 @@ export function linkClear(st: RouteState, h: number): boolean {
  */
 export function landingSeg(st: RouteState, h: number, net: number, unowned: boolean, relays = unowned, forced = -1): number {
   // Its side and its islands are the net's copper; a new island needs `relays`.
-  const s = st.cut.segOf[h]!;
-  return landingOn(st, h, net, unowned, s >= 0 ? s : gapSegOf(st, h, net, forced, relays));
+  return landingOn(st, h, net, unowned, copperSegOf(st, h, net, forced, relays));
 }
 
 /** landingSeg for a hole whose segment for `net` is known: `seg` (see copperSegOf). */

@@ -9,16 +9,16 @@
  * `replayWire(st, a, b, net, islands?)` — put back one copper-side wire step with its claims
  * (`islands`: per hole, the relay island a claim there must join).
  */
-import { claimHole, gapSegOf } from './claims.ts';
+import { claimHole } from './claims.ts';
 import { placeLink } from './landing.ts';
-import { claimSegment, cloneState, union, type RouteState } from './state.ts';
+import { claimSegment, cloneState, copperSegOf, union, type RouteState } from './state.ts';
 
 export function replayWire(st: RouteState, a: number, b: number, net: number, islands?: Int32Array): void {
   st.wires.push(a, b, net);
   let first = -1;
   for (const h of [a, b]) {
     const forced = islands ? islands[h]! : -1;
-    const s = st.cut.segOf[h]! >= 0 ? st.cut.segOf[h]! : gapSegOf(st, h, net, forced);
+    const s = copperSegOf(st, h, net, forced);
     if (s < 0) throw new Error(`route: replayed wire ${a}→${b} lost its copper`);
     claimHole(st, h, net, forced);
     claimSegment(st, s, net);

@@ -41,7 +41,7 @@ export interface Routed {
   stats: RouteStats;
 }
 
-/** Length in mm of a straight link or wire: pitch × holes spanned. */
+/** Length in mm of a link or wire: pitch × holes spanned, row plus column (a bent insulated link is laid along the grid). */
 export function segmentLengthMm(seg: { from: Hole; to: Hole }, pitchMm: number): number {
   return round2((Math.abs(seg.from[0] - seg.to[0]) + Math.abs(seg.from[1] - seg.to[1])) * pitchMm);
 }
@@ -55,7 +55,7 @@ export function routeLayout(design: Design, placement: Layout, options?: RouteOp
   if (!parsed.success)
     return fail(
       parsed.error.issues.map(
-        (i): Problem => ({ code: 'route.bad-options', severity: 'error', path: ['options', ...i.path.map(String)], message: i.message, hint: 'cutStyle is "hole", "between" or "either"; linksOverBodies is true or false' }),
+        (i): Problem => ({ code: 'route.bad-options', severity: 'error', path: ['options', ...i.path.map(String)], message: i.message, hint: 'cutStyle is "hole", "between" or "either"; linksOverBodies and insulatedLinks are true or false' }),
       ),
     );
   const style: CutStyle = options?.cutStyle ?? placement.board.cutStyle ?? 'either';

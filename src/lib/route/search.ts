@@ -41,6 +41,10 @@ export interface SearchOptions {
   relays?: boolean;
 }
 
+/** The maze search's usual options: wires, links and free copper; and with relay islands as well. */
+export const PLAIN: SearchOptions = { wires: true, links: true, unowned: true };
+export const RELAYS: SearchOptions = { ...PLAIN, relays: true };
+
 /** Costs in half-holes so that a bend weighs half a step. */
 const WIRE_STEP = 2;
 const BEND = 1;
@@ -183,9 +187,10 @@ export function search(st: RouteState, sc: Scratch, net: number, root: number, o
       const gap = gapOf[h]! >= 0;
       const gs = gap ? gapSegOf(st, h, net, -1, fresh) : -1;
       sc.gapSeg[h] = gs;
-      sc.loss[h] = gap ? claimLoss(st, h, net) : 0;
       sc.clear[h] = linkClear(st, h) ? 1 : 0;
       sc.land[h] = sc.clear[h] && sc.blocked[h] === 0 ? landingOn(st, h, net, opts.unowned, gap ? gs : segOf[h]!) : -1;
+      // Read only where a link may land.
+      sc.loss[h] = gap && sc.land[h]! >= 0 ? claimLoss(st, h, net) : 0;
     }
   const gapSegAt = (h: number): number => (gapOf[h]! < 0 ? -1 : opts.links ? sc.gapSeg[h]! : gapSegOf(st, h, net, -1, fresh));
   const landable = (h: number): boolean => sc.land[h]! >= 0;
@@ -227,7 +232,7 @@ export function search(st: RouteState, sc: Scratch, net: number, root: number, o
     }
     const x = h % cols;
     const y = (h - x) / cols;
-    if (opts.wires && wireFrom(st, h, net, opts.unowned, gapSegAt(h))) {
+    if (opts.wires && wireFrom(st, h, net, opts.unowned, cs)) {
       for (let dir = 0; dir < 4; dir++) {
         const nx = dir === 0 ? x + 1 : dir === 2 ? x - 1 : x;
         const ny = dir === 1 ? y + 1 : dir === 3 ? y - 1 : y;

@@ -165,11 +165,12 @@ export function claimSegment(st: RouteState, s: number, net: number): void {
 
 /**
  * The segment whose copper hole h carries for `net`: its own segment, or for a gap hole the
- * side of `net` or the relay island a claim there would join (claims.ts), or −1.
+ * side of `net` or the relay island a claim there would join (claims.ts gapSegOf: `forced`
+ * names the island, `fresh` allows a new one), or −1.
  */
-export function copperSegOf(st: RouteState, h: number, net: number): number {
+export function copperSegOf(st: RouteState, h: number, net: number, forced = -1, fresh = true): number {
   const s = st.cut.segOf[h]!;
-  return s >= 0 ? s : gapSegOf(st, h, net);
+  return s >= 0 ? s : gapSegOf(st, h, net, forced, fresh);
 }
 
 /**
