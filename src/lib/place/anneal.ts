@@ -9,11 +9,11 @@
  * geometrically to 1/500 of it over `steps`; the shift radius shrinks with it. The best
  * placement seen is kept (only the parts changed since the last best are copied) and
  * restored at the end. Deterministic for a given generator; `shouldStop` is asked every 256
- * steps; `onProgress` gets 50 reports. The step allocates nothing: moves go through one
- * reused buffer.
+ * steps; `onProgress` gets 50 reports. Moves go through one reused buffer, so a step
+ * allocates nothing of its own (the greedy link plan, when its weight is on, does).
  */
 import { placementTotal, type CostWeights } from './cost.ts';
-import { linePlaces, moveBuffer, partMask, proposeMove, type MoveContext } from './moves.ts';
+import { moveBuffer, partMask, proposeMove, type MoveContext } from './moves.ts';
 import type { Rng } from './rng.ts';
 import type { SectionTable } from './sections.ts';
 import type { PlaceState } from './state.ts';
@@ -135,7 +135,7 @@ export function anneal(s: PlaceState, o: AnnealOptions): AnnealResult {
   const focus = movable.filter((p) => s.pinNet[p]!.some((n) => hot.has(n)));
   let cost = placementTotal(s, o.weights);
   if (!movable.length || o.steps <= 0) return { cost, steps: 0, accepted: 0, stopped: false };
-  const ctx: MoveContext = { s, rng: o.rng, movable, groups, tables, focus, lineAt: linePlaces(s), movableMask: partMask(s, movable) };
+  const ctx: MoveContext = { s, rng: o.rng, movable, groups, tables, focus, movableMask: partMask(s, movable) };
 
   // The move of the last tryMove, and where its parts were (for undo).
   const m = moveBuffer(parts.length);

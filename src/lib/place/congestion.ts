@@ -3,31 +3,14 @@
  * net of two or more pins spreads one wire across the rows and one down the columns of its
  * bounding box (the usual probabilistic estimate); a row or column carrying more than
  * CAPACITY such wires costs the excess. A pin whose four neighbours all hold leads has no
- * way out for its wire and costs 2 more (1/2 with a single way out). O(leads + nets + rows +
- * cols); reads the nets' lead boxes as of the state's last settle.
+ * way out for its wire and costs 2 more (1/2 with a single way out), as the state keeps it
+ * (PlaceState.boxedLeads, pad boards only). O(nets + rows + cols); reads the nets' lead boxes
+ * as of the state's last settle.
  */
 import type { PlaceState } from './state.ts';
 
 /** Wires a row or column of pads takes comfortably (one on the pads, one beside them). */
 const CAPACITY = 2;
-
-/** Leads with no free neighbour count 2, with one 1/2 (what the state keeps on pad boards). */
-function boxedLeads(s: PlaceState): number {
-  const lead = s.tally.leadCount;
-  let boxed = 0;
-  for (const holes of s.netHoles)
-    for (const h of holes) {
-      const x = h % s.W;
-      const y = (h - x) / s.W;
-      let free = 0;
-      if (x > 0 && !lead[h - 1]) free++;
-      if (x + 1 < s.W && !lead[h + 1]) free++;
-      if (y > 0 && !lead[h - s.W]) free++;
-      if (y + 1 < s.H && !lead[h + s.W]) free++;
-      boxed += free === 0 ? 2 : free === 1 ? 0.5 : 0;
-    }
-  return boxed;
-}
 
 /** Per-row and per-column wire loads (scratch, grown on demand). */
 let rows = new Float64Array(64);
@@ -38,7 +21,7 @@ export function padCongestion(s: PlaceState): number {
   if (cols.length < s.W + 1) cols = new Float64Array(2 * s.W + 1);
   rows.fill(0, 0, s.H + 1);
   cols.fill(0, 0, s.W + 1);
-  const boxed = s.map.padLike ? s.boxedLeads : boxedLeads(s);
+  const boxed = s.boxedLeads;
   for (let n = 0; n < s.netHoles.length; n++) {
     if (s.netHoles[n]!.length < 2) continue;
     // The lead box as of the last settle (the cost is read after one).

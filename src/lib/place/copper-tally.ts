@@ -50,7 +50,8 @@ export class CopperTally {
   private readonly spareHi: number[][];
   private readonly spareStarved: number[][];
   /** Index of each hole along its conductor's hole list. */
-  private readonly lineAt: Int32Array;
+  /** Index of each hole in its conductor's hole list (0 off every conductor). */
+  readonly lineAt: Int32Array;
   /** Mask words per conductor; bit i of conductor c's words: hole map.holes[c][i]. */
   private readonly words: number;
   private readonly leadBits: Int32Array;

@@ -40,8 +40,6 @@ export interface MoveContext {
   tables: SectionTable[];
   /** Parts to move more often (on nets the router or the link plan could not join). */
   focus: number[];
-  /** Index of each hole in its conductor's hole list (see linePlaces). */
-  lineAt: Int32Array;
   /** The movable parts as a bit mask (see partMask). */
   movableMask: Int32Array;
 }
@@ -51,13 +49,6 @@ export function partMask(s: PlaceState, parts: number[]): Int32Array {
   const mask = new Int32Array(s.partWords);
   for (const p of parts) mask[p >> 5]! |= 1 << (p & 31);
   return mask;
-}
-
-/** Index of each hole along its conductor's hole list, for MoveContext.lineAt. */
-export function linePlaces(s: PlaceState): Int32Array {
-  const at = new Int32Array(s.W * s.H);
-  for (const line of s.map.holes) line.forEach((h, i) => (at[h] = i));
-  return at;
 }
 
 function put(m: MoveBuffer, k: number, p: number, x: number, y: number, pose: number): void {
@@ -102,7 +93,7 @@ function hop(ctx: MoveContext, p: number, m: MoveBuffer): boolean {
   const h = mates[rng.int(mates.length)]!;
   if (s.owner[h] === p) return false;
   const line = s.map.holes[s.map.cond[h]!]!;
-  const i = ctx.lineAt[h]!;
+  const i = ctx.s.tally.lineAt[h]!;
   const step = (1 + rng.int(4)) * (rng.next() < 0.5 ? -1 : 1);
   const target = line[i + step];
   if (target === undefined) return false;

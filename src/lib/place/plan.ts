@@ -46,7 +46,7 @@ import { routeLayout } from '../route/index.ts';
 import { verifyLayout } from '../verify/index.ts';
 import { copperMap } from './copper-map.ts';
 import { circuitOfDesign } from './circuit-of-design.ts';
-import { DEFAULT_WEIGHTS, placementCost } from './cost.ts';
+import { DEFAULT_WEIGHTS, placementTotal } from './cost.ts';
 import { lockedSpots } from './locked.ts';
 import { designAfterSwaps, placementLayout } from './output.ts';
 import { EFFORT_STEPS, placeOnBoard, polishOnBoard, reweighAndPolish, type BoardSettings, type Placed } from './place-board.ts';
@@ -93,7 +93,7 @@ const SLEEVE = 3 * DEFAULT_WEIGHTS.link;
  * 8 / 17 / 25 / 33 insulated links became 4 / 10 / 25 / 32, on boards up to 9 columns wider.
  */
 const SLEEVE_ROUNDS = 2;
-/** Routing rounds per placement: after a failure the placement is spread by a free column or repaired. */
+/** Routing rounds per placement: after a failure the placement is spread by free columns (or a free strip) or repaired. */
 const ROUNDS = 8;
 /**
  * Routing rounds on designs of more than REPAIR_PARTS parts: their last nets often need a
@@ -126,7 +126,7 @@ const CARRY_WARMTH = 1;
 const CARRY_PARTS = 50;
 /** Designs up to this many parts on an auto strip or pad board look for a smaller board once one routes. */
 const SHRINK_PARTS = 12;
-/** Smaller boards tried at most while shrinking, and placements tried on each. */
+/** Placements tried on each smaller board while shrinking, and in all at most SHRINK_TRIES × SHRINK_SEEDS. */
 const SHRINK_TRIES = 12;
 const SHRINK_SEEDS = 2;
 /** Routing rounds per placement while shrinking (a board that needs many repairs is not worth it). */
@@ -236,7 +236,7 @@ function routeRounds(env: Env, first: Placed, board: Board, set: BoardSettings, 
         return best?.found;
       }
       const layout: Layout = { ...routed.value.layout, meta: { program: PROGRAM, seed: opts.seed, effort: opts.effort, attempt: attempt + 1 } };
-      const cost = placementCost(cur.state, set.weights).total;
+      const cost = placementTotal(cur.state, set.weights);
       const stats = layoutStats(layout, routed.value.stats, cost, problem.parts.length, attempt + 1, steps + cur.anneal.steps);
       const found = { planned: { layout, design: routedDesign, stats }, warnings: [...routed.warnings, ...report.warnings] };
       const sleeved = routed.warnings.filter((w) => w.code === 'route.insulated-link');
@@ -330,7 +330,7 @@ function search(env: Env, effort: Effort, from?: Found['start']): Found | undefi
  * Small designs on an auto strip or pad board: from the found layout's used box, try the
  * boards one column or one row smaller (smaller area first), placed afresh with a few seeds;
  * a smaller board that routes and verifies wins and the search carries on from it, until
- * neither shrink routes or SHRINK_TRIES boards are spent. These placements leave the greedy
+ * neither shrink routes or SHRINK_TRIES × SHRINK_SEEDS placements are spent. These placements leave the greedy
  * link plan out of the cost (it slows each step threefold; the routing decides anyway), and
  * each gets SHRINK_ROUNDS routings, without spreading: the board may not grow.
  */
@@ -359,8 +359,8 @@ function shrink(env: Env, effort: Effort, found: Found): Found {
         if (!placed.ok) break;
         const routed = routeRounds(env, placed, board, set, best.start.attempt, placed.anneal.steps, true);
         if (!routed) continue;
-        if (routed.planned.stats.holesUsed < best.planned.stats.holesUsed)
-          better = { ...routed, score: planScore(routed.planned.stats, pitchMm), start: { placed, board, attempt: best.start.attempt } };
+        // The board is smaller than best's used box in one direction: so is the new used box.
+        better = { ...routed, score: planScore(routed.planned.stats, pitchMm), start: { placed, board, attempt: best.start.attempt } };
       }
       if (better) break;
     }

@@ -3,7 +3,7 @@
  * finished placement without placing it again: insert free columns (and, on strip boards,
  * free rows) of holes between parts and shift everything beyond each by one hole.
  * `failedNets(state, problems)` reads the nets (and their islands) from the router's
- * `route.unroutable` problems.
+ * problems: `route.unroutable`, or `route.insulated-link` warnings for nets to give room.
  *
  * A column or row goes in only where no part's body crosses the boundary, so every lead
  * keeps its strip and its order along it: on a strip board the cuts and the segments to join
@@ -104,40 +104,19 @@ function laneBetweenSegments(s: PlaceState, open: Uint8Array, net: number, islan
   return best;
 }
 
-/** Middle column of a net's leads. */
-function netMiddle(s: PlaceState, net: number): number {
-  let x0 = Infinity;
-  let x1 = -Infinity;
-  for (const h of s.netHoles[net] ?? []) {
-    x0 = Math.min(x0, h % s.W);
-    x1 = Math.max(x1, h % s.W);
-  }
-  return (x0 + x1 + 1) / 2;
-}
-
-/** First and last row of a net's leads. */
-function netRows(s: PlaceState, net: number): [number, number] {
-  let y0 = Infinity;
-  let y1 = -Infinity;
-  for (const h of s.netHoles[net] ?? []) {
-    y0 = Math.min(y0, Math.floor(h / s.W));
-    y1 = Math.max(y1, Math.floor(h / s.W));
-  }
-  return [y0, y1];
-}
-
 /**
  * The open boundary nearest to the lead in column x of the row starting at hole `rowStart`,
- * on the side `step` (−1 left, +1 right), with no lead between: where a body covers the holes
- * next to the lead, past the body (a new column there still gives the lead's copper a free
- * hole). −1 when another lead or the board's edge comes first.
+ * on the side `step` (−1 left, +1 right), with no lead between (`leads`: leads per hole, the
+ * copper tally's count): where a body covers the holes next to the lead, past the body (a
+ * new column there still gives the lead's copper a free hole). −1 when another lead or the
+ * board's edge comes first.
  */
-function besideLead(open: Uint8Array, leads: ReadonlySet<number>, rowStart: number, x: number, step: number, W: number): number {
+function besideLead(open: Uint8Array, leads: Int32Array, rowStart: number, x: number, step: number, W: number): number {
   for (let b = step < 0 ? x : x + 1; b >= 0 && b <= W; b += step) {
     if (open[b]) return b;
     // The hole the next boundary would put between the lead and the new column.
     const next = step < 0 ? b - 1 : b;
-    if (next < 0 || next >= W || leads.has(rowStart + next)) return -1;
+    if (next < 0 || next >= W || leads[rowStart + next]! > 0) return -1;
   }
   return -1;
 }
@@ -156,8 +135,9 @@ export interface FailedNet {
 }
 
 /**
- * The nets named by the router's `route.unroutable` problems, with the lead holes of each
- * island it listed (`data.islands`, pins as "ref.pin"), in the placement `s`.
+ * The nets named by the router's problems (`route.unroutable`, or `route.insulated-link`
+ * warnings), with the lead holes of each island listed (`data.islands`, pins as "ref.pin"),
+ * in the placement `s`.
  */
 export function failedNets(s: PlaceState, problems: Problem[]): FailedNet[] {
   const parts = new Map(s.problem.parts.map((part, p) => [part.ref, p]));
@@ -198,18 +178,17 @@ export function spreadLanes(s: PlaceState, board: Board, failed: FailedNet[]): {
   const rowSet = new Set<number>();
   // Few nets left: room on both sides of every lead of their islands.
   if (failed.length <= FEW && (s.map.alongRows || s.map.padLike)) {
-    const leads = new Set(s.netHoles.flat());
     for (const { islands } of failed)
       for (const h of (islands ?? []).flat()) {
         const x = h % s.W;
         for (const step of [-1, 1]) {
-          const b = besideLead(openCols, leads, h - x, x, step, s.W);
+          const b = besideLead(openCols, s.tally.leadCount, h - x, x, step, s.W);
           if (b >= 0) colSet.add(b);
         }
       }
   }
   for (const { net: n, islands } of failed) {
-    const lane = s.map.alongRows ? laneBetweenSegments(s, openCols, n, islands) : nearestOpen(openCols, netMiddle(s, n), box.x0 + 1, box.x1);
+    const lane = s.map.alongRows ? laneBetweenSegments(s, openCols, n, islands) : nearestOpen(openCols, (s.netMinX[n]! + s.netMaxX[n]! + 1) / 2, box.x0 + 1, box.x1);
     if (lane >= 0) colSet.add(lane);
     // No lane joins two islands: a column beside each island instead, room to land links and
     // to cut relay islands out of the longer gaps. Small islands get one anyway: hemmed in by
@@ -222,7 +201,8 @@ export function spreadLanes(s: PlaceState, board: Board, failed: FailedNet[]): {
         if (at >= 0) colSet.add(at);
       }
     if (lane < 0 && s.map.alongRows && !breadboard) {
-      const [lo, hi] = netRows(s, n);
+      // The net's lead box as of the last settle.
+      const [lo, hi] = [s.netMinY[n]!, s.netMaxY[n]!];
       const row = nearestOpen(openRows, (lo + hi + 1) / 2, Math.max(0, lo), Math.min(s.H, hi + 1));
       if (row >= 0) rowSet.add(row);
     }
